@@ -1,0 +1,63 @@
+import type { Metadata } from 'next';
+import { notFound, redirect } from 'next/navigation';
+import { AppShell } from '@/components/app-shell';
+import { labsForUser, membersOf, membershipOf } from '@/db/queries/labs';
+import { currentUser } from '@/lib/auth/session';
+
+export const dynamic = 'force-dynamic';
+export const metadata: Metadata = { title: 'Lab' };
+
+const ROLE_LABEL = { owner: 'Owner', author: 'Author', reviewer: 'Reviewer', reader: 'Reader' } as const;
+
+export default async function LabHome({ params }: { params: Promise<{ labId: string }> }) {
+  const user = await currentUser();
+  if (!user) redirect('/sign-in');
+  const labId = Number((await params).labId);
+  if (!Number.isInteger(labId) || labId <= 0) notFound();
+  const membership = await membershipOf(user.id, labId);
+  if (!membership) notFound();
+  const [labs, members] = await Promise.all([labsForUser(user.id), membersOf(labId)]);
+
+  return (
+    <AppShell user={user} labs={labs} currentLabId={labId}>
+      <div className="flex items-baseline justify-between gap-4">
+        <div>
+          <p className="text-sm tracking-wide text-ink-faint uppercase">Lab</p>
+          <h1 className="text-3xl font-semibold">{membership.labName}</h1>
+        </div>
+        <p className="text-sm text-ink-soft">
+          You are <strong className="font-medium text-ink">{ROLE_LABEL[membership.role]}</strong> here
+        </p>
+      </div>
+
+      <div className="mt-8 grid gap-8 md:grid-cols-[2fr_1fr]">
+        <section aria-labelledby="memos-heading" className="rounded-lg border border-paper-edge bg-white/60 p-6">
+          <h2 id="memos-heading" className="text-xl font-semibold">
+            Memos
+          </h2>
+          <div className="mt-4 rounded-md border border-dashed border-paper-edge p-8 text-center">
+            <p className="font-serif text-lg">No memos yet.</p>
+            <p className="mt-1 text-sm text-ink-faint">
+              A memo is text with live Estimate blocks in it: every number is recomputed when its data or settings change.
+            </p>
+          </div>
+        </section>
+        <aside className="space-y-6">
+          <section aria-labelledby="members-heading" className="rounded-lg border border-paper-edge bg-white/60 p-6">
+            <h2 id="members-heading" className="text-lg font-semibold">
+              Members
+            </h2>
+            <ul className="mt-3 space-y-2 text-sm">
+              {members.map((m) => (
+                <li key={m.userId} className="flex justify-between gap-2">
+                  <span>{m.name}</span>
+                  <span className="text-ink-faint">{ROLE_LABEL[m.role]}</span>
+                </li>
+              ))}
+            </ul>
+          </section>
+        </aside>
+      </div>
+    </AppShell>
+  );
+}

@@ -1,0 +1,83 @@
+'use client';
+
+import { signIn } from 'next-auth/react';
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { z } from 'zod';
+
+const schema = z.object({
+  email: z.email('Enter an e-mail address like name@example.org.').max(254, 'E-mail address is too long.'),
+  password: z.string().min(1, 'Enter your password.').max(200, 'Password is too long.'),
+});
+
+type Errors = Partial<Record<'email' | 'password' | 'form', string>>;
+
+export function SignInForm({ next }: { next: string }) {
+  const router = useRouter();
+  const [errors, setErrors] = useState<Errors>({});
+  const [pending, setPending] = useState(false);
+
+  async function onSubmit(event: React.FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    const form = new FormData(event.currentTarget);
+    const parsed = schema.safeParse({ email: form.get('email'), password: form.get('password') });
+    if (!parsed.success) {
+      const e: Errors = {};
+      for (const issue of parsed.error.issues) e[issue.path[0] as 'email' | 'password'] ??= issue.message;
+      setErrors(e);
+      return;
+    }
+    setErrors({});
+    setPending(true);
+    const res = await signIn('credentials', { ...parsed.data, redirect: false });
+    setPending(false);
+    if (!res || res.error) {
+      setErrors({ form: res?.error && res.error !== 'CredentialsSignin' ? res.error : 'That e-mail and password do not match an account.' });
+      return;
+    }
+    router.replace(next);
+    router.refresh();
+  }
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="mt-6 space-y-4">
+      <Field label="E-mail" name="email" type="email" autoComplete="email" error={errors.email} />
+      <Field label="Password" name="password" type="password" autoComplete="current-password" error={errors.password} />
+      <p aria-live="polite" role="status" className="min-h-5 text-sm text-oxide">
+        {errors.form}
+      </p>
+      <button
+        type="submit"
+        disabled={pending}
+        className="w-full rounded-md bg-ink px-4 py-2.5 font-medium text-paper transition hover:bg-ink-soft disabled:opacity-60"
+      >
+        {pending ? 'Signing in…' : 'Sign in'}
+      </button>
+    </form>
+  );
+}
+
+function Field(props: { label: string; name: string; type: string; autoComplete: string; error?: string }) {
+  const id = `field-${props.name}`;
+  return (
+    <div>
+      <label htmlFor={id} className="block text-sm font-medium text-ink-soft">
+        {props.label}
+      </label>
+      <input
+        id={id}
+        name={props.name}
+        type={props.type}
+        autoComplete={props.autoComplete}
+        aria-invalid={!!props.error}
+        aria-describedby={props.error ? `${id}-error` : undefined}
+        className="mt-1 w-full rounded-md border border-paper-edge bg-white px-3 py-2 outline-none focus:border-river"
+      />
+      {props.error && (
+        <p id={`${id}-error`} className="mt-1 text-sm text-oxide">
+          {props.error}
+        </p>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,3 @@
+// Long-running companion processes started beside the web server by scripts/serve.ts.
+// Each is a Node script started directly (not through npx) so its PID is the process.
+export const services: { name: string; args: string[] }[] = [];
