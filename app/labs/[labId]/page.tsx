@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import { notFound, redirect } from 'next/navigation';
 import { AppShell } from '@/components/app-shell';
+import { LabNav } from '@/components/lab-nav';
 import { labsForUser, membersOf, membershipOf } from '@/db/queries/labs';
 import { currentUser } from '@/lib/auth/session';
 
@@ -29,6 +30,7 @@ export default async function LabHome({ params }: { params: Promise<{ labId: str
           You are <strong className="font-medium text-ink">{ROLE_LABEL[membership.role]}</strong> here
         </p>
       </div>
+      <LabNav labId={labId} role={membership.role} current="memos" />
 
       <div className="mt-8 grid gap-8 md:grid-cols-[2fr_1fr]">
         <section aria-labelledby="memos-heading" className="rounded-lg border border-paper-edge bg-white/60 p-6">
