@@ -22,10 +22,13 @@ echo "== type check"
 npx tsc --noEmit -p tsconfig.json
 
 echo "== unit, reference and integration tests"
-npx vitest run
+rm -f test-results/vitest-*.json; mkdir -p test-results
+npx vitest run --reporter=default --reporter=json --outputFile.json=test-results/vitest-main.json
 
 echo "== browser tests (production build in .next-test)"
 mkdir -p .locks test-results
 flock .locks/next-build-test env NEXT_DIST_DIR=.next-test npx next build >test-results/next-build.log 2>&1 \
   || { tail -60 test-results/next-build.log; echo "next build failed (test-results/next-build.log)" >&2; exit 1; }
-NEXT_DIST_DIR=.next-test npx vitest run --config vitest.e2e.config.ts
+NEXT_DIST_DIR=.next-test npx vitest run --config vitest.e2e.config.ts --reporter=default --reporter=json --outputFile.json=test-results/vitest-e2e.json
+
+node --import tsx scripts/test-summary.ts test-results/vitest-main.json test-results/vitest-e2e.json
