@@ -9,3 +9,4 @@ export * from './tables/audit';
 export * from './tables/dev-mail';
 export * from './tables/memos';
 export * from './tables/runs';
+export * from './tables/datasets';
