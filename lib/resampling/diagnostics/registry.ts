@@ -1,0 +1,37 @@
+import type { Warning } from '../contract/response';
+import { degenerateReplicates } from './degenerate-replicates';
+import { droppedValues } from './dropped-values';
+import { extremeStatistic } from './extreme-statistic';
+import { heavyTies } from './heavy-ties';
+import { intervalNotes } from './interval-notes';
+import { nonSmoothJackknife } from './non-smooth-jackknife';
+import { replicateOutliers } from './replicate-outliers';
+import { skewedReplicates } from './skewed-replicates';
+import { smallB } from './small-b';
+import { smallSample } from './small-sample';
+import type { Diagnostic, DiagnosticContext } from './types';
+import { undefinedReplicates } from './undefined-replicates';
+
+/** Every diagnostic, in the order its warning is listed. */
+export const DIAGNOSTICS: readonly Diagnostic[] = [
+  droppedValues,
+  smallSample,
+  heavyTies,
+  extremeStatistic,
+  undefinedReplicates,
+  degenerateReplicates,
+  smallB,
+  skewedReplicates,
+  replicateOutliers,
+  nonSmoothJackknife,
+  intervalNotes,
+];
+
+export function diagnose(ctx: DiagnosticContext): Warning[] {
+  const out: Warning[] = [];
+  for (const d of DIAGNOSTICS) {
+    const w = d(ctx);
+    if (w) out.push(w);
+  }
+  return out;
+}

@@ -1,0 +1,67 @@
+import type { Rng } from '../random/rng';
+import { uniformIndex } from '../random/uniform-index';
+import type { PreparedStatistic } from '../statistics/types';
+import type { CountingScheme, PreparedScheme } from './types';
+
+/**
+ * Resampling units with replacement within strata (one stratum = the ordinary bootstrap):
+ * each stratum of size m gets m independent uniform draws from its own units, so stratum
+ * sizes are fixed (Davison & Hinkley 1997, §3.2.1). Draws go stratum by stratum in unit
+ * order, and straight into a count array — no index array, no copy of the data.
+ * Cost: n index draws plus one evaluation of the statistic per replicate.
+ */
+export function countingScheme(statistic: PreparedStatistic, strata: Int32Array[], description: string, plainResampling: boolean): PreparedScheme {
+  const n = statistic.n;
+  const counts = new Int32Array(n);
+  const single = strata.length === 1 && isIdentity(strata[0]);
+
+  function fillCounts(rng: Rng, c: Int32Array): void {
+    c.fill(0);
+    if (single) {
+      for (let k = 0; k < n; k++) c[uniformIndex(rng, n)]++;
+      return;
+    }
+    for (let s = 0; s < strata.length; s++) {
+      const units = strata[s];
+      const m = units.length;
+      for (let k = 0; k < m; k++) c[units[uniformIndex(rng, m)]]++;
+    }
+  }
+
+  function drawIndices(rng: Rng, out: Int32Array): void {
+    let pos = 0;
+    for (let s = 0; s < strata.length; s++) {
+      const units = strata[s];
+      const m = units.length;
+      for (let k = 0; k < m; k++) out[pos++] = units[uniformIndex(rng, m)];
+    }
+  }
+
+  const counting: CountingScheme = { strata, counts, fillCounts, drawIndices };
+  return {
+    description,
+    plainResampling,
+    counting,
+    replicate(rng: Rng): number {
+      fillCounts(rng, counts);
+      return statistic.fromCounts(counts, n);
+    },
+  };
+}
+
+function isIdentity(units: Int32Array): boolean {
+  for (let i = 0; i < units.length; i++) if (units[i] !== i) return false;
+  return true;
+}
+
+/** Splits units into strata by a key per unit (first appearance order). */
+export function strataFromKeys(keys: ArrayLike<string | number>): Int32Array[] {
+  const map = new Map<string | number, number[]>();
+  for (let i = 0; i < keys.length; i++) {
+    const k = keys[i];
+    let list = map.get(k);
+    if (!list) map.set(k, (list = []));
+    list.push(i);
+  }
+  return [...map.values()].map((l) => Int32Array.from(l));
+}

@@ -1,0 +1,53 @@
+import type { z } from 'zod';
+import type { Rng } from '../random/rng';
+import type { PreparedStatistic } from '../statistics/types';
+
+/**
+ * How resampling schemes plug into the engine. A scheme is one file exporting a
+ * `SchemeDefinition`, listed once in `registry.ts`.
+ *
+ * `prepare` gets the prepared statistic and the cleaned label columns the scheme asked for,
+ * and returns a `PreparedScheme` whose `replicate(rng)` draws one bootstrap data set and
+ * returns the statistic on it. Schemes that resample units with replacement also expose
+ * `counting` (the strata and the last resample's counts): the engine then offers the
+ * studentized interval (inner SE on each resample), exact enumeration and index export.
+ */
+export interface SchemeContext {
+  statistic: PreparedStatistic;
+  /** Number of units. */
+  n: number;
+  /** Cleaned label column for each unit (the columns named by `labelColumns`). */
+  labels(column: string): string[];
+}
+
+export interface CountingScheme {
+  /** Units of each stratum; every unit belongs to exactly one stratum. */
+  readonly strata: readonly Int32Array[];
+  /** Counts of the most recent resample drawn by replicate() or fillCounts(). */
+  readonly counts: Int32Array;
+  /** Draws one resample into `counts` (zeroed first). */
+  fillCounts(rng: Rng, counts: Int32Array): void;
+  /** Draws one resample as a list of n unit indices, with exactly the draws fillCounts makes. */
+  drawIndices(rng: Rng, out: Int32Array): void;
+}
+
+export interface PreparedScheme {
+  /** Words for the methods paragraph, e.g. "ordinary bootstrap (resampling rows)". */
+  readonly description: string;
+  replicate(rng: Rng): number;
+  readonly counting?: CountingScheme;
+  /** Closed-form and order-statistic exact answers assume plain resampling of the sample. */
+  readonly plainResampling: boolean;
+}
+
+export interface SchemeDefinition<S extends { name: string } = { name: string }, T extends z.ZodType = z.ZodType> {
+  readonly name: S['name'];
+  readonly schema: T;
+  /** Label columns the scheme reads (e.g. `by`), with the request field naming each. */
+  labelColumns(settings: S): { column: string; path: string }[];
+  prepare(ctx: SchemeContext, settings: S): PreparedScheme;
+}
+
+export function defineScheme<T extends z.ZodObject<{ name: z.ZodLiteral<string> }>>(def: SchemeDefinition<z.output<T>, T>): SchemeDefinition<z.output<T>, T> {
+  return def;
+}

@@ -1,0 +1,63 @@
+/**
+ * Order statistics of a resample given as unit counts, read in one pass over the data in
+ * sorted order: the resample's expanded ascending sequence has sorted[p] repeated
+ * counts[order[p]] times, so the value at (0-based) rank r is the sorted[p] at which the
+ * running count first exceeds r. Cost O(n) per call, no allocation.
+ */
+
+const pair = new Float64Array(2);
+
+/** Values at ranks r and r+1 of the resample (0-based), written to the returned scratch pair. */
+export function ranksPair(sorted: Float64Array, order: Int32Array, counts: Int32Array, r: number): Float64Array {
+  let cum = 0;
+  let p = 0;
+  const m = sorted.length;
+  for (; p < m; p++) {
+    cum += counts[order[p]];
+    if (cum > r) break;
+  }
+  pair[0] = sorted[p];
+  if (cum > r + 1) {
+    pair[1] = sorted[p];
+    return pair;
+  }
+  for (p++; p < m; p++) {
+    if (counts[order[p]] > 0) break;
+  }
+  pair[1] = p < m ? sorted[p] : pair[0];
+  return pair;
+}
+
+/** Value at rank r (0-based) of the resample. */
+export function rankValue(sorted: Float64Array, order: Int32Array, counts: Int32Array, r: number): number {
+  let cum = 0;
+  const m = sorted.length;
+  for (let p = 0; p < m; p++) {
+    cum += counts[order[p]];
+    if (cum > r) return sorted[p];
+  }
+  return sorted[m - 1];
+}
+
+/**
+ * Type-7 quantile (Hyndman & Fan 1996) of a resample of size `total`, computed as R's
+ * quantile.default computes it: h = (total − 1)p, (1 − f)·x₍⌊h⌋₎ + f·x₍⌊h⌋+1₎.
+ */
+export function quantileFromCounts(sorted: Float64Array, order: Int32Array, counts: Int32Array, total: number, p: number): number {
+  const index = (total - 1) * p;
+  const lo = Math.floor(index);
+  if (index === lo) return rankValue(sorted, order, counts, lo);
+  const v = ranksPair(sorted, order, counts, lo);
+  const a = v[0];
+  const b = v[1];
+  if (a === b) return a;
+  const h = index - lo;
+  return (1 - h) * a + h * b;
+}
+
+/** Median of a resample, as R's median(): the middle value, or the mean of the two middle ones. */
+export function medianFromCounts(sorted: Float64Array, order: Int32Array, counts: Int32Array, total: number): number {
+  if (total % 2 === 1) return rankValue(sorted, order, counts, (total - 1) / 2);
+  const v = ranksPair(sorted, order, counts, total / 2 - 1);
+  return (v[0] + v[1]) / 2;
+}
