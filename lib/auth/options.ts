@@ -2,8 +2,9 @@ import 'server-only';
 import type { NextAuthOptions } from 'next-auth';
 import CredentialsProvider from 'next-auth/providers/credentials';
 import { z } from 'zod';
-import { findUserByEmail } from '@/db/queries/users';
-import { verifyPassword } from './password';
+import { AppError } from '../errors';
+import { clientAddress } from './client-address';
+import { signInWithPassword } from './sign-in';
 
 const credentialsSchema = z.object({
   email: z.email().max(254),
@@ -21,24 +22,35 @@ export const authOptions: NextAuthOptions = {
     CredentialsProvider({
       name: 'E-mail and password',
       credentials: { email: { label: 'E-mail', type: 'email' }, password: { label: 'Password', type: 'password' } },
-      async authorize(raw) {
+      async authorize(raw, req) {
         const parsed = credentialsSchema.safeParse(raw);
         if (!parsed.success) return null;
-        const user = await findUserByEmail(parsed.data.email);
-        // Compare against a dummy hash when the user is unknown so timing does not reveal accounts.
-        const ok = await verifyPassword(parsed.data.password, user?.passwordHash ?? '$2b$10$CwTycUXWue0Thq9StjUM0uJ8.jZ6Vv7Ww6Q0k3hS6Wq1e6Hf4r7yK');
-        if (!user || !ok) return null;
-        return { id: String(user.id), email: user.email, name: user.name };
+        try {
+          const user = await signInWithPassword({ ...parsed.data, address: clientAddress(req?.headers ?? {}) });
+          if (!user) return null;
+          return { id: String(user.id), email: user.email, name: user.name, sv: user.sessionVersion };
+        } catch (e) {
+          // next-auth hands a thrown Error's message to the sign-in form (res.error).
+          if (e instanceof AppError && e.kind === 'rate_limited') throw new Error(e.message);
+          throw e;
+        }
       },
     }),
   ],
   callbacks: {
     async jwt({ token, user }) {
-      if (user) token.uid = Number(user.id);
+      if (user) {
+        token.uid = Number(user.id);
+        token.sv = (user as { sv?: number }).sv ?? 0;
+      }
       return token;
     },
     async session({ session, token }) {
-      if (session.user) (session.user as { id?: number }).id = token.uid as number;
+      if (session.user) {
+        const u = session.user as { id?: number; sv?: number };
+        u.id = token.uid as number;
+        u.sv = (token.sv as number | undefined) ?? 0;
+      }
       return session;
     },
   },

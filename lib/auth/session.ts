@@ -1,20 +1,26 @@
 import 'server-only';
-import { getServerSession } from 'next-auth';
+import { findUserById } from '@/db/queries/users';
 import { AppError } from '../errors';
-import { authOptions } from './options';
+import { readSessionClaims } from './session-source';
 
 export interface SessionUser {
   id: number;
   email: string;
   name: string;
+  emailVerified: boolean;
 }
 
-/** The signed-in user, or null. */
+/**
+ * The signed-in user, or null. The account is read fresh from the database on every call:
+ * a deleted account, or a session older than the last password change or reset (its
+ * session version is behind), counts as signed out.
+ */
 export async function currentUser(): Promise<SessionUser | null> {
-  const session = await getServerSession(authOptions);
-  const u = session?.user as { id?: number; email?: string | null; name?: string | null } | undefined;
-  if (!u?.id) return null;
-  return { id: u.id, email: u.email ?? '', name: u.name ?? '' };
+  const claims = await readSessionClaims();
+  if (!claims) return null;
+  const user = await findUserById(claims.userId);
+  if (!user || user.sessionVersion !== claims.sessionVersion) return null;
+  return { id: user.id, email: user.email, name: user.name, emailVerified: user.emailVerified };
 }
 
 /** The signed-in user; throws unauthorized:session otherwise. */
