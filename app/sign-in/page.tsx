@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import Link from 'next/link';
 import { redirect } from 'next/navigation';
 import { SignInForm } from '@/components/auth/sign-in-form';
 import { Wordmark } from '@/components/wordmark';
@@ -40,6 +41,14 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
           <h2 className="text-2xl font-semibold">Sign in</h2>
           <p className="mt-1 text-sm text-ink-faint">Use the e-mail address your lab invited.</p>
           <SignInForm next={next} />
+          <p className="mt-6 flex flex-wrap justify-between gap-2 text-sm">
+            <Link href="/forgot-password" className="text-river underline">
+              Forgot your password?
+            </Link>
+            <Link href="/sign-up" className="text-river underline">
+              Create an account
+            </Link>
+          </p>
         </section>
       </div>
     </main>

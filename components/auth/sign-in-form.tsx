@@ -4,6 +4,7 @@ import { signIn } from 'next-auth/react';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { z } from 'zod';
+import { Field, FormStatus } from './field';
 
 const schema = z.object({
   email: z.email('Enter an e-mail address like name@example.org.').max(254, 'E-mail address is too long.'),
@@ -43,9 +44,7 @@ export function SignInForm({ next }: { next: string }) {
     <form onSubmit={onSubmit} noValidate className="mt-6 space-y-4">
       <Field label="E-mail" name="email" type="email" autoComplete="email" error={errors.email} />
       <Field label="Password" name="password" type="password" autoComplete="current-password" error={errors.password} />
-      <p aria-live="polite" role="status" className="min-h-5 text-sm text-oxide">
-        {errors.form}
-      </p>
+      <FormStatus message={errors.form} />
       <button
         type="submit"
         disabled={pending}
@@ -54,30 +53,5 @@ export function SignInForm({ next }: { next: string }) {
         {pending ? 'Signing in…' : 'Sign in'}
       </button>
     </form>
-  );
-}
-
-function Field(props: { label: string; name: string; type: string; autoComplete: string; error?: string }) {
-  const id = `field-${props.name}`;
-  return (
-    <div>
-      <label htmlFor={id} className="block text-sm font-medium text-ink-soft">
-        {props.label}
-      </label>
-      <input
-        id={id}
-        name={props.name}
-        type={props.type}
-        autoComplete={props.autoComplete}
-        aria-invalid={!!props.error}
-        aria-describedby={props.error ? `${id}-error` : undefined}
-        className="mt-1 w-full rounded-md border border-paper-edge bg-white px-3 py-2 outline-none focus:border-river"
-      />
-      {props.error && (
-        <p id={`${id}-error`} className="mt-1 text-sm text-oxide">
-          {props.error}
-        </p>
-      )}
-    </div>
   );
 }
