@@ -7,6 +7,6 @@ import { FitError } from './fit-error';
 export function checkValues(x: ArrayLike<number>, family: string): void {
   if (x.length === 0) throw new FitError('empty', `the ${family} fit needs at least one value`);
   for (let i = 0; i < x.length; i++) {
-    if (!Number.isFinite(x[i])) throw new FitError('non-finite', `value ${i + 1} is not a finite number (${family} fit)`);
+    if (!Number.isFinite(x[i])) throw new FitError('non-finite', `is not a finite number (${family} fit)`, i);
   }
 }

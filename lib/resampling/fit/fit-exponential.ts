@@ -21,7 +21,7 @@ export function fitExponential(x: ArrayLike<number>): FittedModel {
   const n = x.length;
   let sum = 0;
   for (let i = 0; i < n; i++) {
-    if (x[i] < 0) throw new FitError('negative', `value ${i + 1} is negative (${x[i]}): an exponential model needs values ≥ 0`);
+    if (x[i] < 0) throw new FitError('negative', `is negative (${x[i]}): an exponential model needs values ≥ 0`, i);
     sum += x[i];
   }
   if (!(sum > 0)) throw new FitError('degenerate', 'all values are 0: an exponential model needs a positive mean');

@@ -23,7 +23,7 @@ export function fitLognormal(x: ArrayLike<number>): FittedModel {
   const logs = new Float64Array(n);
   let sum = 0;
   for (let i = 0; i < n; i++) {
-    if (!(x[i] > 0)) throw new FitError('non-positive', `value ${i + 1} is ${x[i]}: a lognormal model needs values > 0`);
+    if (!(x[i] > 0)) throw new FitError('non-positive', `is ${x[i]}: a lognormal model needs values > 0`, i);
     logs[i] = Math.log(x[i]);
     sum += logs[i];
   }

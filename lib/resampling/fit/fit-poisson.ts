@@ -24,8 +24,8 @@ export function fitPoisson(x: ArrayLike<number>): FittedModel {
   let sumLogFact = 0;
   for (let i = 0; i < n; i++) {
     const v = x[i];
-    if (v < 0) throw new FitError('negative', `value ${i + 1} is negative (${v}): a poisson model needs counts 0, 1, 2, …`);
-    if (!Number.isInteger(v)) throw new FitError('non-integer', `value ${i + 1} is not a whole number (${v}): a poisson model needs counts`);
+    if (v < 0) throw new FitError('negative', `is negative (${v}): a poisson model needs counts 0, 1, 2, …`, i);
+    if (!Number.isInteger(v)) throw new FitError('non-integer', `is not a whole number (${v}): a poisson model needs counts`, i);
     sum += v;
     sumLogFact += logFactorial(v);
   }

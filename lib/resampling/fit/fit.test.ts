@@ -96,11 +96,14 @@ describe('data a family cannot fit', () => {
     expect(() => fitNormal([])).toThrow(/at least one value/);
     expect(() => fitNormal([1, NaN])).toThrow(/value 2 is not a finite/);
     expect(() => fitFamily('gamma', [1, 2])).toThrow(/unknown family "gamma"/);
-    try {
-      fitPoisson([0.5]);
-    } catch (e) {
-      expect((e as FitError).code).toBe('non-integer');
-    }
+    const err = (() => {
+      try {
+        fitPoisson([1, 0.5]);
+      } catch (e) {
+        return e as FitError;
+      }
+    })();
+    expect(err).toMatchObject({ code: 'non-integer', index: 1, reason: 'is not a whole number (0.5): a poisson model needs counts' });
   });
 });
 
