@@ -1,27 +1,141 @@
 import seedrandom from 'seedrandom';
 
-/** A seeded random source: 32-bit integers and doubles in [0, 1). */
+/** A seeded random source: 32-bit integers, doubles in [0, 1), and bulk index counts. */
 export interface Rng {
   /** A uniformly distributed signed 32-bit integer. */
   int32(): number;
   /** A uniform double in [0, 1) with 53 random bits. */
   double(): number;
+  /**
+   * Adds `times` uniform draws from [0, m) to counts — counts[units[i]] (or counts[i]
+   * without units) — using exactly the 32-bit draws that `times` calls of uniformIndex(this, m)
+   * would use. The bootstrap's hot loop.
+   */
+  addCounts(counts: Int32Array, m: number, times: number, units: Int32Array | null): void;
 }
 
 /**
  * The engine's generator: Tyche-i (Neves, S. & Araujo, F. (2011), "Fast and small nonlinear
  * pseudorandom number generators for computer simulation", PPAM 2011, LNCS 7203: 92–101),
- * an add-rotate-xor generator built from the ChaCha quarter-round, period about 2¹²⁷, as
- * implemented by the seedrandom package (`seedrandom.tychei`). It was chosen over
- * seedrandom's default ARC4 for speed (about 5 ns per 32-bit draw in V8).
+ * an add-rotate-xor generator built from the ChaCha quarter-round, period about 2¹²⁷.
+ * Seeding is seedrandom's (`seedrandom.tychei(seed, { state: true })`); the recurrence is
+ * then run here with its state in local variables, so the hot loop costs about 1–2 ns a
+ * draw instead of a method call through seedrandom's closure. The stream is identical to
+ * seedrandom's tychei output (random/rng.test.ts checks 10⁵ draws).
  *
  * Each random stream is seeded with the string `${seed}\u001f${stream}`: replicate chunk k
  * uses stream `chunk:k`, so a response does not depend on how chunks are spread over
  * worker threads. Nothing in the engine calls Math.random.
  */
-export const RNG_NAME = 'tychei (seedrandom 3.0.5)';
+export const RNG_NAME = 'tychei (Tyche-i, seeded by seedrandom 3.0.5)';
+
+const TWO32 = 4294967296;
+
+export class TycheI implements Rng {
+  private a: number;
+  private b: number;
+  private c: number;
+  private d: number;
+
+  constructor(state: { a: number; b: number; c: number; d: number }) {
+    this.a = state.a | 0;
+    this.b = state.b | 0;
+    this.c = state.c | 0;
+    this.d = state.d | 0;
+  }
+
+  int32(): number {
+    let b = this.b | 0;
+    let c = this.c | 0;
+    let d = this.d | 0;
+    let a = this.a | 0;
+    b = (b << 25) ^ (b >>> 7) ^ c;
+    c = (c - d) | 0;
+    d = (d << 24) ^ (d >>> 8) ^ a;
+    a = (a - b) | 0;
+    this.b = b = (b << 20) ^ (b >>> 12) ^ c;
+    this.c = c = (c - d) | 0;
+    this.d = (d << 16) ^ (c >>> 16) ^ a;
+    return (this.a = (a - b) | 0);
+  }
+
+  double(): number {
+    let result: number;
+    do {
+      const top = this.int32() >>> 11;
+      const bot = (this.int32() >>> 0) / TWO32;
+      result = (top + bot) / (1 << 21);
+    } while (result === 0);
+    return result;
+  }
+
+  addCounts(counts: Int32Array, m: number, times: number, units: Int32Array | null): void {
+    if (units === null) this.addDirect(counts, m, times);
+    else this.addVia(counts, m, times, units);
+  }
+
+  // The two loops below are the same but for the last line: separate so each stays monomorphic.
+  private addDirect(counts: Int32Array, m: number, times: number): void {
+    let a = this.a | 0;
+    let b = this.b | 0;
+    let c = this.c | 0;
+    let d = this.d | 0;
+    const threshold = (TWO32 - m) % m;
+    for (let k = 0; k < times; k++) {
+      b = (b << 25) ^ (b >>> 7) ^ c;
+      c = (c - d) | 0;
+      d = (d << 24) ^ (d >>> 8) ^ a;
+      a = (a - b) | 0;
+      b = (b << 20) ^ (b >>> 12) ^ c;
+      c = (c - d) | 0;
+      d = (d << 16) ^ (c >>> 16) ^ a;
+      a = (a - b) | 0;
+      // Lemire's multiply-and-reject (see uniform-index.ts); a rejected draw repeats k.
+      const x = (a >>> 0) * m;
+      const hi = Math.floor(x / TWO32);
+      if (x - hi * TWO32 < threshold) {
+        k--;
+        continue;
+      }
+      counts[hi]++;
+    }
+    this.a = a;
+    this.b = b;
+    this.c = c;
+    this.d = d;
+  }
+
+  private addVia(counts: Int32Array, m: number, times: number, units: Int32Array): void {
+    let a = this.a | 0;
+    let b = this.b | 0;
+    let c = this.c | 0;
+    let d = this.d | 0;
+    const threshold = (TWO32 - m) % m;
+    for (let k = 0; k < times; k++) {
+      b = (b << 25) ^ (b >>> 7) ^ c;
+      c = (c - d) | 0;
+      d = (d << 24) ^ (d >>> 8) ^ a;
+      a = (a - b) | 0;
+      b = (b << 20) ^ (b >>> 12) ^ c;
+      c = (c - d) | 0;
+      d = (d << 16) ^ (c >>> 16) ^ a;
+      a = (a - b) | 0;
+      const x = (a >>> 0) * m;
+      const hi = Math.floor(x / TWO32);
+      if (x - hi * TWO32 < threshold) {
+        k--;
+        continue;
+      }
+      counts[units[hi]]++;
+    }
+    this.a = a;
+    this.b = b;
+    this.c = c;
+    this.d = d;
+  }
+}
 
 export function createRng(seed: string, stream: string): Rng {
-  const prng = seedrandom.tychei(`${seed}\u001f${stream}`);
-  return { int32: prng.int32, double: prng.double };
+  const prng = seedrandom.tychei(`${seed}\u001f${stream}`, { state: true });
+  return new TycheI(prng.state() as unknown as { a: number; b: number; c: number; d: number });
 }

@@ -18,13 +18,12 @@ export function countingScheme(statistic: PreparedStatistic, strata: Int32Array[
   function fillCounts(rng: Rng, c: Int32Array): void {
     c.fill(0);
     if (single) {
-      for (let k = 0; k < n; k++) c[uniformIndex(rng, n)]++;
+      rng.addCounts(c, n, n, null);
       return;
     }
     for (let s = 0; s < strata.length; s++) {
       const units = strata[s];
-      const m = units.length;
-      for (let k = 0; k < m; k++) c[units[uniformIndex(rng, m)]]++;
+      rng.addCounts(c, units.length, units.length, units);
     }
   }
 

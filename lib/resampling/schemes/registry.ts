@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { ordinary } from './ordinary';
 import { stratified } from './stratified';
 import type { SchemeDefinition } from './types';

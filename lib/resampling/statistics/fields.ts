@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 
 /** A column name in the request's data. */
 export const columnName = z.string({ error: 'give a column name' }).min(1, 'give a column name');

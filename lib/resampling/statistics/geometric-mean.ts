@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { EngineError } from '../errors';
 import { columnName } from './fields';
 import { defineStatistic } from './types';

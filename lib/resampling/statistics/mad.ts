@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { medianFromCounts } from './count-scan';
 import { columnName } from './fields';
 import { sortUnits } from './sort-units';

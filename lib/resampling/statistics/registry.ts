@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { correlation } from './correlation';
 import { cv } from './cv';
 import { geometricMean } from './geometric-mean';

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { columnName } from './fields';
 import { sortUnits } from './sort-units';
 import { defineStatistic } from './types';

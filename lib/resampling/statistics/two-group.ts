@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { columnName, twoLevels } from './fields';
 import type { GroupNeed } from './types';
 

@@ -1,0 +1,66 @@
+/**
+ * Command line: `npm run -s compute -- FILE` (FILE a request JSON, `-` for stdin) prints
+ * one JSON response on stdout. Bad input prints `{"error":{"code","message","path"}}` on
+ * stdout and exits 1 (2 for a usage error, 3 for an internal error). Options:
+ * `--threads N` (0 = no workers), `--pretty`, `--progress` (progress lines on stderr).
+ * Bundled to dist/engine/cli.mjs and started by scripts/compute.mjs.
+ */
+import { readFileSync } from 'node:fs';
+import { EngineError } from '@/lib/resampling';
+import { compute, prewarmCompute } from './index';
+
+function usage(message: string): never {
+  process.stdout.write(`${JSON.stringify({ error: { code: 'bad_request:usage', message, path: '' } })}\n`);
+  process.stderr.write('usage: npm run -s compute -- FILE|- [--threads N] [--pretty] [--progress]\n');
+  process.exit(2);
+}
+
+function finish(text: string, code: number): void {
+  process.stdout.write(`${text}\n`, () => process.exit(code));
+}
+
+export async function main(argv: string[]): Promise<void> {
+  let file: string | null = null;
+  let threads: number | undefined;
+  let pretty = false;
+  let progress = false;
+  for (let i = 0; i < argv.length; i++) {
+    const a = argv[i];
+    if (a === '--pretty') pretty = true;
+    else if (a === '--progress') progress = true;
+    else if (a === '--threads') {
+      threads = Number(argv[++i]);
+      if (!Number.isInteger(threads) || threads < 0) usage('--threads needs a whole number ≥ 0');
+    } else if (file === null) file = a;
+    else usage(`unexpected argument ${a}`);
+  }
+  if (file === null) usage('give a request file, or - to read the request from standard input');
+  // Large requests go to worker threads: start them now, while the request is read and parsed.
+  if (threads !== 0) prewarmCompute(threads);
+
+  let text: string;
+  try {
+    text = readFileSync(file === '-' ? 0 : file, 'utf8');
+  } catch (e) {
+    return finish(JSON.stringify({ error: { code: 'bad_request:file', message: `cannot read ${file}: ${(e as Error).message}`, path: '' } }), 2);
+  }
+  let input: unknown;
+  try {
+    input = JSON.parse(text);
+  } catch (e) {
+    return finish(JSON.stringify({ error: { code: 'bad_request:json', message: `the request is not valid JSON: ${(e as Error).message}`, path: '' } }), 1);
+  }
+  try {
+    const response = await compute(input, {
+      threads,
+      onProgress: progress ? (done, total) => process.stderr.write(`progress ${done}/${total}\n`) : undefined,
+    });
+    finish(pretty ? JSON.stringify(response, null, 2) : JSON.stringify(response), 0);
+  } catch (e) {
+    if (e instanceof EngineError) return finish(JSON.stringify(e.toJSON()), 1);
+    process.stderr.write(`${(e as Error).stack ?? String(e)}\n`);
+    finish(JSON.stringify({ error: { code: 'internal:engine', message: 'the engine failed unexpectedly', path: '' } }), 3);
+  }
+}
+
+await main(process.argv.slice(2));
