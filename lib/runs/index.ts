@@ -1,0 +1,3 @@
+export { cancelRun, getRunView, planKey, requestRun, runLab, type RunRequest } from './service';
+export { canonicalJson, runKey } from './key';
+export type { RunError, RunView, UnreadyView } from './types';
