@@ -16,6 +16,7 @@ export { drawAll, prepare, runRequest } from './engine/run-request';
 export type { RunOptions } from './engine/run-request';
 export { EngineError } from './errors';
 export { CHUNK_SIZE, chunkCount, chunkRange } from './replicates/chunks';
+export { resampleIndices } from './replicates/resample-indices';
 export { runChunk } from './replicates/run-chunk';
 export type { ChunkResult } from './replicates/run-chunk';
 export { createRng, RNG_NAME } from './random/rng';

@@ -1,0 +1,70 @@
+import seedrandom from 'seedrandom';
+import { describe, expect, it } from 'vitest';
+import { createRng } from './rng';
+import { uniformIndex } from './uniform-index';
+
+describe('engine generator = seedrandom tychei', () => {
+  it('produces exactly seedrandom.tychei’s stream (int32 and double)', () => {
+    // Source: the seedrandom 3.0.5 package's own Tyche-i implementation.
+    const ours = createRng('nitrate', 'chunk:0');
+    const ref = seedrandom.tychei('nitrate\u001fchunk:0');
+    const a = Array.from({ length: 100_000 }, () => ours.int32());
+    const b = Array.from({ length: 100_000 }, () => ref.int32());
+    expect(a).toEqual(b);
+    const c = Array.from({ length: 1000 }, () => ours.double());
+    const d = Array.from({ length: 1000 }, () => ref.double());
+    expect(c).toEqual(d);
+  });
+
+  it('bulk addCounts uses the same draws as uniformIndex', () => {
+    for (const m of [1, 2, 7, 1000, 65_537, 2_000_000]) {
+      const a = createRng('s', `m${m}`);
+      const b = createRng('s', `m${m}`);
+      const size = Math.min(m, 5000);
+      const viaBulk = new Int32Array(size);
+      const viaOne = new Int32Array(size);
+      const units = Int32Array.from({ length: m }, (_, i) => i % size);
+      a.addCounts(viaBulk, m, 3000, m > size ? units : null);
+      for (let k = 0; k < 3000; k++) viaOne[units[uniformIndex(b, m)]]++;
+      expect(Array.from(viaBulk)).toEqual(Array.from(viaOne));
+      expect(a.int32()).toBe(b.int32());
+    }
+  });
+
+  it('different streams and seeds differ; the same seed repeats', () => {
+    const draw = (seed: string, stream: string) => Array.from({ length: 5 }, ((r) => () => r.int32())(createRng(seed, stream)));
+    expect(draw('a', 'chunk:0')).toEqual(draw('a', 'chunk:0'));
+    expect(draw('a', 'chunk:0')).not.toEqual(draw('a', 'chunk:1'));
+    expect(draw('a', 'chunk:0')).not.toEqual(draw('b', 'chunk:0'));
+  });
+});
+
+describe('uniform indices', () => {
+  it('are uniform: chi-square over 10 cells below the 0.1% critical value', () => {
+    // Chi-square with 9 degrees of freedom: P(χ² > 27.88) = 0.001 (any χ² table).
+    const rng = createRng('uniformity', 'x');
+    const cells = new Array(10).fill(0);
+    const N = 200_000;
+    for (let i = 0; i < N; i++) cells[uniformIndex(rng, 10)]++;
+    const chi = cells.reduce((a, c) => a + (c - N / 10) ** 2 / (N / 10), 0);
+    expect(chi).toBeLessThan(27.88);
+  });
+
+  it('a given point is absent from a resample with probability ≈ (1 − 1/n)ⁿ ≈ e⁻¹', () => {
+    // Source: Efron, B. (1983), JASA 78: 316–331 (the .632 estimator): P(x₁ ∉ x*) = (1 − 1/n)ⁿ → e⁻¹ ≈ 0.368.
+    const n = 50;
+    const trials = 20_000;
+    const rng = createRng('absent', 'x');
+    let absent = 0;
+    const counts = new Int32Array(n);
+    for (let t = 0; t < trials; t++) {
+      counts.fill(0);
+      rng.addCounts(counts, n, n, null);
+      if (counts[0] === 0) absent++;
+    }
+    const p = (1 - 1 / n) ** n;
+    const mcSe = Math.sqrt((p * (1 - p)) / trials);
+    expect(Math.abs(absent / trials - p)).toBeLessThan(4 * mcSe);
+    expect(Math.abs(p - Math.exp(-1))).toBeLessThan(0.004);
+  });
+});
