@@ -1,0 +1,95 @@
+import { execFile } from 'node:child_process';
+import { writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { promisify } from 'node:util';
+import { afterAll, describe, expect, it } from 'vitest';
+import { EngineError, runRequest } from '@/lib/resampling';
+import { closeComputePool, compute } from './index';
+
+const run = promisify(execFile);
+const root = process.cwd();
+
+// Invented demo data: daily nitrate readings (mg/L) downstream of a treatment works.
+const daily = Array.from({ length: 3000 }, (_, i) => Math.round((3 + Math.sin(i / 9) + ((i * 7919) % 101) / 50) * 100) / 100);
+const big = { data: { nitrate: daily }, statistic: { name: 'median', column: 'nitrate' }, B: 3300, seed: 'river', intervals: { methods: ['percentile', 'bca', 'normal'] }, include: ['replicates'] };
+
+afterAll(async () => {
+  await closeComputePool();
+});
+
+describe('compute() in worker threads', () => {
+  it('is bit-identical to runRequest, with 1 and 2 workers', async () => {
+    const expected = JSON.stringify(runRequest(big));
+    expect(JSON.stringify(await compute(big, { threads: 2 }))).toBe(expected);
+    expect(JSON.stringify(await compute(big, { threads: 1 }))).toBe(expected);
+  }, 120_000);
+
+  it('is bit-identical for a studentized interval with a nested bootstrap inner SE', async () => {
+    const req = { data: { x: daily.slice(0, 60) }, statistic: { name: 'trimmed-mean', column: 'x', trim: 0.1 }, B: 1100, seed: 'st', intervals: { methods: ['studentized'], studentized: { se: 'bootstrap', innerB: 25 } } };
+    expect(JSON.stringify(await compute(req, { threads: 2 }))).toBe(JSON.stringify(runRequest(req)));
+  }, 120_000);
+
+  it('reports progress up to B', async () => {
+    const seen: number[] = [];
+    await compute(big, { threads: 2, onProgress: (done, total) => (expect(total).toBe(3300), seen.push(done)) });
+    expect(seen.length).toBe(7);
+    expect(seen.at(-1)).toBe(3300);
+    expect([...seen].sort((a, b) => a - b)).toEqual(seen);
+  }, 120_000);
+
+  it('rejects with the abort reason when cancelled, and keeps working afterwards', async () => {
+    const ctl = new AbortController();
+    const p = compute({ ...big, B: 200_000 }, { threads: 2, signal: ctl.signal, onProgress: () => ctl.abort() });
+    await expect(p).rejects.toMatchObject({ name: 'AbortError' });
+    const again = await compute({ ...big, B: 1000 }, { threads: 2 });
+    expect(again.B).toBe(1000);
+    const pre = new AbortController();
+    pre.abort();
+    await expect(compute(big, { signal: pre.signal })).rejects.toMatchObject({ name: 'AbortError' });
+  }, 120_000);
+
+  it('rejects bad input with EngineError naming the field', async () => {
+    await expect(compute({ ...big, statistic: { name: 'median', column: 'nope' } })).rejects.toBeInstanceOf(EngineError);
+    await expect(compute({ ...big, B: -3 })).rejects.toMatchObject({ code: 'invalid:request', path: 'B' });
+  });
+});
+
+describe('command line', () => {
+  const cli = (args: string[], input?: string) =>
+    new Promise<{ code: number; stdout: string }>((resolve) => {
+      const child = execFile(process.execPath, [path.join(root, 'scripts/compute.mjs'), ...args], { cwd: root, maxBuffer: 64 * 1024 * 1024 }, (err, stdout) => {
+        resolve({ code: err ? ((err as { code?: number }).code ?? 1) : 0, stdout });
+      });
+      if (input !== undefined) child.stdin!.end(input);
+    });
+
+  it('prints the same response as the module, from a file and from stdin', async () => {
+    const file = path.join(tmpdir(), `margin-cli-${process.pid}.json`);
+    writeFileSync(file, JSON.stringify(big));
+    const expected = JSON.stringify(runRequest(big));
+    const fromFile = await cli([file]);
+    expect(fromFile.code).toBe(0);
+    expect(fromFile.stdout.trim()).toBe(expected);
+    const fromStdin = await cli(['-', '--threads', '0'], JSON.stringify(big));
+    expect(fromStdin.stdout.trim()).toBe(expected);
+  }, 120_000);
+
+  it('exits non-zero with a JSON error on bad input', async () => {
+    const bad = await cli(['-'], '{"data": {"x": [1, 2, "three"]}, "statistic": {"name": "mean", "column": "x"}}');
+    expect(bad.code).toBe(1);
+    expect(JSON.parse(bad.stdout)).toEqual({ error: { code: 'invalid:data', message: expect.stringContaining('three'), path: 'data.x[2]' } });
+    const notJson = await cli(['-'], '{"data": ');
+    expect(notJson.code).toBe(1);
+    expect(JSON.parse(notJson.stdout).error.code).toBe('bad_request:json');
+    const noFile = await cli([]);
+    expect(noFile.code).toBe(2);
+  }, 60_000);
+
+  it('the bundle builder reports fresh bundles after a build', async () => {
+    const { stdout } = await run(process.execPath, [path.join(root, 'lib/compute/build-engine.mjs')], { cwd: root });
+    expect(stdout.trim()).toBe(path.join(root, 'dist/engine'));
+    const { isFresh } = await import('./build-engine.mjs' as string);
+    expect(isFresh(root)).toBe(true);
+  }, 60_000);
+});
