@@ -45,6 +45,7 @@ export function checkDoc(json: unknown): CheckedDoc {
   let node: PMNode;
   try {
     node = memoSchema().nodeFromJSON(json);
+    if (node.type.name !== 'doc') throw new Error('the top node must be "doc"');
     node.check();
   } catch (e) {
     throw new AppError('invalid:memo', `The document does not fit the memo format: ${(e as Error).message}`, 'doc');
