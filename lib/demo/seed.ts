@@ -3,6 +3,7 @@ import { addMember, createLab } from '@/db/queries/labs';
 import { findUserByEmail, insertUser } from '@/db/queries/users';
 import { hashPassword } from '@/lib/auth/password';
 import { seedDatasets } from '@/lib/datasets/seed';
+import { seedMemos } from '@/lib/memos/seed';
 import { DEMO_LAB, DEMO_PASSWORD, DEMO_PEOPLE } from './people';
 
 export interface SeedResult {
@@ -30,4 +31,4 @@ export async function seedDemo(): Promise<SeedResult> {
 export type SeedStep = (ctx: { labId: number; userIds: number[] }) => Promise<void>;
 
 /** Later features (datasets, memos) append their demo content here. */
-export const seedSteps: SeedStep[] = [seedDatasets];
+export const seedSteps: SeedStep[] = [seedDatasets, seedMemos];

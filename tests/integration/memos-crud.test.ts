@@ -73,3 +73,16 @@ describe('memos', () => {
     await expect(m.saveMemo(labId, copy, 1, text('edit while archived'), userId)).rejects.toMatchObject({ code: 'conflict:memo' });
   });
 });
+
+describe('demo memo', () => {
+  it('is seeded after the demo datasets, with every block type, and passes the document checks', async () => {
+    const { seedDemo } = await import('@/lib/demo/seed');
+    const r = await seedDemo();
+    const hits = await m.searchMemos(r.labId!, 'treatment works');
+    expect(hits.map((h) => h.title)).toEqual(['Nitrate below the treatment works']);
+    const memo = await m.memoInLab(r.labId!, hits[0].id);
+    const checked = m.checkDoc(memo.doc);
+    expect(new Set(checked.blocks.map((b) => b.type))).toEqual(new Set(['data-table', 'estimate', 'resample-histogram', 'convergence-plot', 'group-comparison']));
+    expect(JSON.stringify(memo.doc)).toContain('"liveValue"');
+  });
+});
