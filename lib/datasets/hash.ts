@@ -8,7 +8,7 @@ export interface HashableColumn {
   values: Float64Array | ArrayLike<string | null>;
 }
 
-const BATCH_ROWS = 8192;
+const BATCH_ROWS = 4096;
 
 /**
  * The canonical form of a table, the text whose SHA-256 is a version's content hash. It

@@ -72,3 +72,22 @@ describe('column summaries', () => {
     expect(summarise(t.columns[1])).toEqual({ kind: 'date', n: 3, min: '2026-03-01', max: '2026-03-09', distinct: 3, distinctCapped: false });
   });
 });
+
+describe('selection', () => {
+  it('puts the k-th smallest in place for every k, on data with many ties, and keeps the multiset', async () => {
+    const { selectKth } = await import('./summary');
+    const rng = seedrandom('select');
+    for (const n of [1, 2, 5, 33, 500]) {
+      const base = Float64Array.from({ length: n }, () => Math.floor(rng() * 7));
+      const sorted = [...base].sort((a, b) => a - b);
+      for (let k = 0; k < n; k++) {
+        const a = Float64Array.from(base);
+        selectKth(a, k);
+        expect(a[k]).toBe(sorted[k]);
+        for (let i = 0; i < k; i++) expect(a[i]).toBeLessThanOrEqual(a[k]);
+        for (let i = k + 1; i < n; i++) expect(a[i]).toBeGreaterThanOrEqual(a[k]);
+        expect([...a].sort((x, y) => x - y)).toEqual(sorted);
+      }
+    }
+  });
+});
