@@ -1,9 +1,12 @@
 import type { Metadata } from 'next';
 import { notFound, redirect } from 'next/navigation';
 import { AppShell } from '@/components/app-shell';
+import { LabDatasetsCard } from '@/components/datasets/lab-datasets-card';
+import { LabMemosCard } from '@/components/editor/lab-memos-card';
 import { LabNav } from '@/components/lab-nav';
 import { labsForUser, membersOf, membershipOf } from '@/db/queries/labs';
 import { currentUser } from '@/lib/auth/session';
+import { can } from '@/lib/authz';
 
 export const dynamic = 'force-dynamic';
 export const metadata: Metadata = { title: 'Lab' };
@@ -33,17 +36,7 @@ export default async function LabHome({ params }: { params: Promise<{ labId: str
       <LabNav labId={labId} role={membership.role} current="memos" />
 
       <div className="mt-8 grid gap-8 md:grid-cols-[2fr_1fr]">
-        <section aria-labelledby="memos-heading" className="rounded-lg border border-paper-edge bg-white/60 p-6">
-          <h2 id="memos-heading" className="text-xl font-semibold">
-            Memos
-          </h2>
-          <div className="mt-4 rounded-md border border-dashed border-paper-edge p-8 text-center">
-            <p className="font-serif text-lg">No memos yet.</p>
-            <p className="mt-1 text-sm text-ink-faint">
-              A memo is text with live Estimate blocks in it: every number is recomputed when its data or settings change.
-            </p>
-          </div>
-        </section>
+        <LabMemosCard labId={labId} canWrite={can(membership.role, 'memo:write')} />
         <aside className="space-y-6">
           <section aria-labelledby="members-heading" className="rounded-lg border border-paper-edge bg-white/60 p-6">
             <h2 id="members-heading" className="text-lg font-semibold">
@@ -58,6 +51,7 @@ export default async function LabHome({ params }: { params: Promise<{ labId: str
               ))}
             </ul>
           </section>
+          <LabDatasetsCard labId={labId} />
         </aside>
       </div>
     </AppShell>
