@@ -43,13 +43,23 @@ export function previewOf(sample: { bytes: Uint8Array; whole: boolean } | { text
   }
   if (!text.trim()) return { options: { delimiter: ',', header: true, decimal: '.', ...given }, names: [], types: [], rows: [], problem: 'The file is empty.' };
   const { newline, ...options } = guessOptions(text, given, whole);
-  const parsed = Papa.parse<string[]>(completeLines(text, whole), { delimiter: options.delimiter, newline, skipEmptyLines: true });
-  const all = parsed.data;
+  const parsed = Papa.parse<string[]>(completeLines(text, whole), { delimiter: options.delimiter, newline });
+  // Line numbers as the server counts them: blank lines and newlines inside quotes count too.
+  const all: string[][] = [];
+  const lines: number[] = [];
+  let line = 1;
+  for (const r of parsed.data) {
+    const here = line;
+    line += 1 + r.reduce((n, f) => n + (f.match(/\n/g)?.length ?? 0), 0);
+    if (r.length === 1 && r[0].trim() === '') continue;
+    all.push(r);
+    lines.push(here);
+  }
   const width = all[0]?.length ?? 0;
   const names = options.header ? all[0].map((n, j) => n.trim() || `column_${j + 1}`) : Array.from({ length: width }, (_, j) => `column_${j + 1}`);
   const body = options.header ? all.slice(1) : all;
   const ragged = body.findIndex((r) => r.length !== width);
-  if (ragged >= 0) problem = `Row ${ragged + 1} of the preview has ${body[ragged].length} fields, but the first row has ${width}. Check the delimiter.`;
+  if (ragged >= 0) problem = `Line ${lines[ragged + (options.header ? 1 : 0)]} has ${body[ragged].length} fields, but line ${lines[0]} has ${width}. Check the delimiter.`;
   const builders = names.map((n) => new ColumnBuilder(n, options.decimal));
   for (const r of body) if (r.length === width) r.forEach((f, j) => builders[j].push(f, 0));
   const types = builders.map((b) => b.finish().type);
