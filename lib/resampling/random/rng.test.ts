@@ -16,18 +16,30 @@ describe('engine generator = seedrandom tychei', () => {
     expect(c).toEqual(d);
   });
 
-  it('bulk addCounts uses the same draws as uniformIndex', () => {
-    for (const m of [1, 2, 7, 1000, 65_537, 2_000_000]) {
-      const a = createRng('s', `m${m}`);
-      const b = createRng('s', `m${m}`);
-      const size = Math.min(m, 5000);
-      const viaBulk = new Int32Array(size);
-      const viaOne = new Int32Array(size);
-      const units = Int32Array.from({ length: m }, (_, i) => i % size);
-      a.addCounts(viaBulk, m, 3000, m > size ? units : null);
-      for (let k = 0; k < 3000; k++) viaOne[units[uniformIndex(b, m)]]++;
-      expect(Array.from(viaBulk)).toEqual(Array.from(viaOne));
-      expect(a.int32()).toBe(b.int32());
+  it('bulk addCounts draws exactly the indices fillIndices lists (and uniformIndex above 2¹⁶)', () => {
+    for (const m of [1, 2, 7, 1000, 65_536, 65_537, 2_000_000]) {
+      for (const times of [1, 999, 3000]) {
+        const a = createRng('s', `m${m}`);
+        const b = createRng('s', `m${m}`);
+        const size = Math.min(m, 5000);
+        const viaBulk = new Int32Array(size);
+        const viaList = new Int32Array(size);
+        const units = Int32Array.from({ length: m }, (_, i) => i % size);
+        a.addCounts(viaBulk, m, times, m > size ? units : null);
+        const list = new Int32Array(times);
+        b.fillIndices(list, 0, m, times);
+        for (const i of list) {
+          expect(i).toBeGreaterThanOrEqual(0);
+          expect(i).toBeLessThan(m);
+          viaList[units[i]]++;
+        }
+        expect(Array.from(viaBulk)).toEqual(Array.from(viaList));
+        expect(a.int32()).toBe(b.int32());
+        if (m > 65_536) {
+          const c = createRng('s', `m${m}`);
+          for (let k = 0; k < times; k++) expect(list[k]).toBe(uniformIndex(c, m));
+        }
+      }
     }
   });
 
@@ -48,6 +60,18 @@ describe('uniform indices', () => {
     for (let i = 0; i < N; i++) cells[uniformIndex(rng, 10)]++;
     const chi = cells.reduce((a, c) => a + (c - N / 10) ** 2 / (N / 10), 0);
     expect(chi).toBeLessThan(27.88);
+  });
+
+  it('bulk draws from 16-bit halves are uniform too (m = 10 and m = 6, chi-square)', () => {
+    // Chi-square critical values at 0.1%: 27.88 (9 df), 20.52 (5 df) (any χ² table).
+    for (const [m, crit] of [[10, 27.88], [6, 20.52]] as const) {
+      const rng = createRng('uniformity16', `m${m}`);
+      const counts = new Int32Array(m);
+      const N = 300_000;
+      rng.addCounts(counts, m, N, null);
+      const chi = Array.from(counts).reduce((acc, c) => acc + (c - N / m) ** 2 / (N / m), 0);
+      expect(chi).toBeLessThan(crit);
+    }
   });
 
   it('a given point is absent from a resample with probability ≈ (1 − 1/n)ⁿ ≈ e⁻¹', () => {

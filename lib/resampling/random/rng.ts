@@ -1,4 +1,5 @@
 import seedrandom from 'seedrandom';
+import { uniformIndex as uniformIndex32 } from './uniform-index';
 
 /** A seeded random source: 32-bit integers, doubles in [0, 1), and bulk index counts. */
 export interface Rng {
@@ -8,10 +9,13 @@ export interface Rng {
   double(): number;
   /**
    * Adds `times` uniform draws from [0, m) to counts — counts[units[i]] (or counts[i]
-   * without units) — using exactly the 32-bit draws that `times` calls of uniformIndex(this, m)
-   * would use. The bootstrap's hot loop.
+   * without units). The bootstrap's hot loop. For m ≤ 2¹⁶ each 32-bit output gives two
+   * indices, one from each 16-bit half by Lemire's method (exactly uniform; an unused half at
+   * the end of a call is dropped); for larger m one index per output (uniform-index.ts).
    */
   addCounts(counts: Int32Array, m: number, times: number, units: Int32Array | null): void;
+  /** Writes the same `times` indices addCounts would draw into out[offset…], in draw order. */
+  fillIndices(out: Int32Array, offset: number, m: number, times: number): void;
 }
 
 /**
@@ -30,6 +34,9 @@ export interface Rng {
 export const RNG_NAME = 'tychei (Tyche-i, seeded by seedrandom 3.0.5)';
 
 const TWO32 = 4294967296;
+const TWO16 = 65536;
+/** Up to this many units, each 32-bit output gives two indices (its 16-bit halves). */
+export const SMALL_M = 65536;
 
 export class TycheI implements Rng {
   private a: number;
@@ -70,12 +77,106 @@ export class TycheI implements Rng {
   }
 
   addCounts(counts: Int32Array, m: number, times: number, units: Int32Array | null): void {
-    if (units === null) this.addDirect(counts, m, times);
-    else this.addVia(counts, m, times, units);
+    if (m <= SMALL_M) {
+      if (units === null) this.addDirect16(counts, m, times);
+      else this.addVia16(counts, m, times, units);
+    } else if (units === null) this.addDirect32(counts, m, times);
+    else this.addVia32(counts, m, times, units);
   }
 
-  // The two loops below are the same but for the last line: separate so each stays monomorphic.
-  private addDirect(counts: Int32Array, m: number, times: number): void {
+  fillIndices(out: Int32Array, offset: number, m: number, times: number): void {
+    // The reference path: one index at a time, in the order the fast loops below use.
+    if (m <= SMALL_M) {
+      const threshold = (TWO16 - m) % m;
+      let k = 0;
+      while (k < times) {
+        const w = this.int32();
+        for (let half = 0; half < 2 && k < times; half++) {
+          const x = (half === 0 ? w >>> 16 : w & 0xffff) * m;
+          if ((x & 0xffff) >= threshold) out[offset + k++] = x >>> 16;
+        }
+      }
+      return;
+    }
+    for (let k = 0; k < times; k++) out[offset + k] = uniformIndex32(this, m);
+  }
+
+  // The loops below differ only in where a draw lands; they are kept separate so each stays
+  // monomorphic in V8, with the generator state in local int32 variables.
+
+  /** m ≤ 2¹⁶: two indices per 32-bit output, Lemire's method on each 16-bit half. */
+  private addDirect16(counts: Int32Array, m: number, times: number): void {
+    let a = this.a | 0;
+    let b = this.b | 0;
+    let c = this.c | 0;
+    let d = this.d | 0;
+    const threshold = (TWO16 - m) % m;
+    let k = 0;
+    while (k < times) {
+      b = (b << 25) ^ (b >>> 7) ^ c;
+      c = (c - d) | 0;
+      d = (d << 24) ^ (d >>> 8) ^ a;
+      a = (a - b) | 0;
+      b = (b << 20) ^ (b >>> 12) ^ c;
+      c = (c - d) | 0;
+      d = (d << 16) ^ (c >>> 16) ^ a;
+      a = (a - b) | 0;
+      const x1 = (a >>> 16) * m;
+      if ((x1 & 0xffff) >= threshold) {
+        counts[x1 >>> 16]++;
+        k++;
+      }
+      if (k < times) {
+        const x2 = (a & 0xffff) * m;
+        if ((x2 & 0xffff) >= threshold) {
+          counts[x2 >>> 16]++;
+          k++;
+        }
+      }
+    }
+    this.a = a;
+    this.b = b;
+    this.c = c;
+    this.d = d;
+  }
+
+  private addVia16(counts: Int32Array, m: number, times: number, units: Int32Array): void {
+    let a = this.a | 0;
+    let b = this.b | 0;
+    let c = this.c | 0;
+    let d = this.d | 0;
+    const threshold = (TWO16 - m) % m;
+    let k = 0;
+    while (k < times) {
+      b = (b << 25) ^ (b >>> 7) ^ c;
+      c = (c - d) | 0;
+      d = (d << 24) ^ (d >>> 8) ^ a;
+      a = (a - b) | 0;
+      b = (b << 20) ^ (b >>> 12) ^ c;
+      c = (c - d) | 0;
+      d = (d << 16) ^ (c >>> 16) ^ a;
+      a = (a - b) | 0;
+      const x1 = (a >>> 16) * m;
+      if ((x1 & 0xffff) >= threshold) {
+        counts[units[x1 >>> 16]]++;
+        k++;
+      }
+      if (k < times) {
+        const x2 = (a & 0xffff) * m;
+        if ((x2 & 0xffff) >= threshold) {
+          counts[units[x2 >>> 16]]++;
+          k++;
+        }
+      }
+    }
+    this.a = a;
+    this.b = b;
+    this.c = c;
+    this.d = d;
+  }
+
+  /** m > 2¹⁶: one index per 32-bit output (uniform-index.ts). */
+  private addDirect32(counts: Int32Array, m: number, times: number): void {
     let a = this.a | 0;
     let b = this.b | 0;
     let c = this.c | 0;
@@ -90,7 +191,6 @@ export class TycheI implements Rng {
       c = (c - d) | 0;
       d = (d << 16) ^ (c >>> 16) ^ a;
       a = (a - b) | 0;
-      // Lemire's multiply-and-reject (see uniform-index.ts); a rejected draw repeats k.
       const x = (a >>> 0) * m;
       const hi = Math.floor(x / TWO32);
       if (x - hi * TWO32 < threshold) {
@@ -105,7 +205,7 @@ export class TycheI implements Rng {
     this.d = d;
   }
 
-  private addVia(counts: Int32Array, m: number, times: number, units: Int32Array): void {
+  private addVia32(counts: Int32Array, m: number, times: number, units: Int32Array): void {
     let a = this.a | 0;
     let b = this.b | 0;
     let c = this.c | 0;

@@ -1,5 +1,4 @@
 import type { Rng } from '../random/rng';
-import { uniformIndex } from '../random/uniform-index';
 import type { PreparedStatistic } from '../statistics/types';
 import type { CountingScheme, PreparedScheme } from './types';
 
@@ -32,7 +31,9 @@ export function countingScheme(statistic: PreparedStatistic, strata: Int32Array[
     for (let s = 0; s < strata.length; s++) {
       const units = strata[s];
       const m = units.length;
-      for (let k = 0; k < m; k++) out[pos++] = units[uniformIndex(rng, m)];
+      rng.fillIndices(out, pos, m, m);
+      for (let k = 0; k < m; k++) out[pos + k] = units[out[pos + k]];
+      pos += m;
     }
   }
 

@@ -1,0 +1,125 @@
+// Benchmark of issue 3: median of n = 10,000 values, B = 10,000 replicates, 95% percentile
+// interval, timed as whole processes on the same machine in the same run:
+//   Margin   `npm run -s compute -- FILE`           (worker threads on every core, typed arrays)
+//   R        `Rscript bench/resampling/boot.R`       (boot::boot + boot.ci, r-cran-boot)
+//   scipy    `/usr/bin/python3 bench/resampling/scipy_bench.py`  (scipy.stats.bootstrap, vectorised)
+// and the floor: drawing the n·B indices alone. Prints medians of repeated runs, peak RSS
+// (GNU time's maximum resident set size of the process tree) and the ratios, with targets
+// R/Margin ≥ 10, scipy/Margin ≥ 5, Margin peak RSS < 300 MB. Results go to bench/results/.
+//
+//   npm run bench                 (REPS=5 Margin runs, RREPS=3 R and scipy runs by default)
+import { execFileSync, spawnSync } from 'node:child_process';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { availableParallelism, tmpdir } from 'node:os';
+import path from 'node:path';
+import { createRng } from '@/lib/resampling';
+import { measureFloor } from './resampling/floor';
+
+const root = process.cwd();
+const n = Number(process.env.N ?? 10_000);
+const B = Number(process.env.B ?? 10_000);
+const reps = Number(process.env.REPS ?? 5);
+const slowReps = Number(process.env.RREPS ?? 3);
+const hasTime = existsSync('/usr/bin/time');
+
+// Invented data: n lognormal nitrate readings (mg/L), from the engine's own seeded generator.
+const rng = createRng('bench', 'data');
+const x = Array.from({ length: n }, () => {
+  const u = rng.double();
+  const v = rng.double();
+  return Math.round(Math.exp(0.5 * Math.sqrt(-2 * Math.log(u)) * Math.cos(2 * Math.PI * v) + 1) * 1e4) / 1e4;
+});
+const dir = path.join(tmpdir(), `margin-bench-${process.pid}`);
+mkdirSync(dir, { recursive: true });
+const requestFile = path.join(dir, 'request.json');
+const dataFile = path.join(dir, 'x.txt');
+writeFileSync(requestFile, JSON.stringify({ data: { x }, statistic: { name: 'median', column: 'x' }, B, seed: 'bench', intervals: { level: 0.95, methods: ['percentile'] } }));
+writeFileSync(dataFile, `${x.join('\n')}\n`);
+
+interface Run {
+  seconds: number;
+  rssMB: number | null;
+  out: string;
+}
+
+function timed(cmd: string, args: string[], env: NodeJS.ProcessEnv = process.env): Run {
+  const full = hasTime ? ['/usr/bin/time', ['-f', '__TIME__ %e %M', cmd, ...args]] : [cmd, args];
+  const t0 = performance.now();
+  const r = spawnSync(full[0] as string, full[1] as string[], { cwd: root, env, encoding: 'utf8', maxBuffer: 256 * 1024 * 1024 });
+  const seconds = (performance.now() - t0) / 1000;
+  if (r.status !== 0) throw new Error(`${cmd} ${args.join(' ')} failed (${r.status}): ${r.stderr.slice(-2000)}`);
+  const m = /__TIME__ ([\d.]+) (\d+)/.exec(r.stderr ?? '');
+  return { seconds, rssMB: m ? Number(m[2]) / 1024 : null, out: r.stdout.trim() };
+}
+
+function median(v: number[]): number {
+  const s = [...v].sort((a, b) => a - b);
+  return s.length % 2 ? s[(s.length - 1) / 2] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
+}
+
+function series(label: string, count: number, f: () => Run): { seconds: number; rssMB: number | null; runs: number[]; out: string } {
+  const runs: Run[] = [];
+  for (let i = 0; i < count; i++) {
+    runs.push(f());
+    process.stdout.write(`  ${label} run ${i + 1}/${count}: ${runs[i].seconds.toFixed(3)} s${runs[i].rssMB ? `, ${runs[i].rssMB!.toFixed(0)} MB` : ''}\n`);
+  }
+  const rss = runs.map((r) => r.rssMB).filter((v): v is number => v !== null);
+  return { seconds: median(runs.map((r) => r.seconds)), rssMB: rss.length ? Math.max(...rss) : null, runs: runs.map((r) => r.seconds), out: runs[0].out };
+}
+
+console.log(`Resampling benchmark: median, n = ${n}, B = ${B}, percentile interval; ${process.env.HOSTNAME ?? 'this machine'}, ${os()} cores`);
+console.log('building the engine bundle (not timed) …');
+execFileSync(process.execPath, [path.join(root, 'lib/compute/build-engine.mjs')], { cwd: root });
+timed('npm', ['run', '-s', 'compute', '--', requestFile]); // warm the file cache
+
+const margin = series('margin', reps, () => timed('npm', ['run', '-s', 'compute', '--', requestFile]));
+const marginOut = JSON.parse(margin.out);
+
+const rAvailable = spawnSync('Rscript', ['-e', 'library(boot)'], { encoding: 'utf8' }).status === 0;
+const r = rAvailable ? series('R boot', slowReps, () => timed('Rscript', [path.join(root, 'bench/resampling/boot.R'), dataFile, String(B), '1'])) : null;
+
+const scipyEnv = { ...process.env };
+const unsetBlas = 'OPENBLAS_CORETYPE' in scipyEnv;
+if (unsetBlas) {
+  delete scipyEnv.OPENBLAS_CORETYPE;
+  delete scipyEnv.OPENBLAS_L2_SIZE;
+}
+const pyAvailable = spawnSync('/usr/bin/python3', ['-c', 'import scipy.stats'], { encoding: 'utf8' }).status === 0;
+const scipyDefault = pyAvailable ? series('scipy (batch default)', slowReps, () => timed('/usr/bin/python3', [path.join(root, 'bench/resampling/scipy_bench.py'), dataFile, String(B), '1', 'none'], scipyEnv)) : null;
+const scipyBatch = pyAvailable ? series('scipy (batch 1000)', slowReps, () => timed('/usr/bin/python3', [path.join(root, 'bench/resampling/scipy_bench.py'), dataFile, String(B), '1', '1000'], scipyEnv)) : null;
+const scipyBest = scipyDefault && scipyBatch ? (scipyBatch.seconds < scipyDefault.seconds ? scipyBatch : scipyDefault) : (scipyDefault ?? scipyBatch);
+
+console.log('measuring the floor (index draws alone, one thread) …');
+const floor = measureFloor(JSON.parse(readFileSync(requestFile, 'utf8')));
+
+const fmt = (v: number | null | undefined, d = 2) => (v === null || v === undefined ? 'n/a' : v.toFixed(d));
+const rows = [
+  ['Margin (npm run -s compute)', margin.seconds, margin.rssMB, `${marginOut.intervals.percentile.lower.toFixed(4)} – ${marginOut.intervals.percentile.upper.toFixed(4)}`],
+  ['R boot (Rscript)', r?.seconds ?? null, r?.rssMB ?? null, r?.out ?? 'not available'],
+  ['scipy bootstrap, batch default', scipyDefault?.seconds ?? null, scipyDefault?.rssMB ?? null, scipyDefault?.out ?? 'not available'],
+  ['scipy bootstrap, batch 1000', scipyBatch?.seconds ?? null, scipyBatch?.rssMB ?? null, scipyBatch?.out ?? 'not available'],
+] as const;
+console.log('\nwhole process, median of runs:');
+for (const [label, s, rss, out] of rows) console.log(`  ${label.padEnd(32)} ${fmt(s as number | null, 3).padStart(7)} s   peak RSS ${fmt(rss as number | null, 0).padStart(5)} MB   ${out}`);
+
+const ratioR = r ? r.seconds / margin.seconds : null;
+const ratioPy = scipyBest ? scipyBest.seconds / margin.seconds : null;
+const floorParallel = floor.floorMs / Math.min(2, os());
+console.log('\nratios (target):');
+console.log(`  R boot / Margin                 ${fmt(ratioR, 1)}×   (≥ 10×) ${ratioR === null ? '' : ratioR >= 10 ? 'met' : 'NOT met'}`);
+console.log(`  scipy (faster setting) / Margin ${fmt(ratioPy, 1)}×   (≥ 5×) ${ratioPy === null ? '' : ratioPy >= 5 ? 'met' : 'NOT met'}`);
+console.log(`  Margin peak RSS                 ${fmt(margin.rssMB, 0)} MB (< 300 MB) ${margin.rssMB === null ? '' : margin.rssMB < 300 ? 'met' : 'NOT met'}`);
+console.log('\nthe floor (one thread, in process):');
+console.log(`  drawing ${floor.draws.toExponential(0)} indices alone      ${fmt(floor.floorMs, 0)} ms  (${fmt((floor.floorMs * 1e6) / floor.draws)} ns per index)`);
+console.log(`  engine replicate loop (draws + median) ${fmt(floor.engineMs, 0)} ms = ${fmt(floor.engineMs / floor.floorMs)}× the floor`);
+console.log(`  whole Margin process vs floor on ${Math.min(2, os())} cores (${fmt(floorParallel, 0)} ms): ${fmt((margin.seconds * 1000) / floorParallel)}×; process start, parsing and output make up the rest`);
+if (unsetBlas) console.log('  (OPENBLAS_CORETYPE / OPENBLAS_L2_SIZE were unset for the scipy runs only)');
+
+mkdirSync(path.join(root, 'bench/results'), { recursive: true });
+const result = { when: new Date().toISOString(), n, B, margin, r, scipyDefault, scipyBatch, ratioR, ratioPy, floor };
+writeFileSync(path.join(root, 'bench/results/resampling.json'), `${JSON.stringify(result, null, 2)}\n`);
+console.log(`\nwritten: bench/results/resampling.json`);
+
+function os(): number {
+  return availableParallelism();
+}
