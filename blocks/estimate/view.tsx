@@ -34,7 +34,7 @@ export function EstimateView(props: NodeViewProps) {
       {out && (
         <div className={`mt-4 transition-opacity ${state.stale ? 'opacity-60' : ''}`} aria-busy={state.stale}>
           <p className="font-serif text-2xl text-ink" data-testid="estimate-headline">
-            <span className="text-ink-soft">{STATISTIC_LABEL[out.response.provenance.statistic as StatisticName] ?? 'θ̂'} = </span>
+            <span className="text-ink-soft">{STATISTIC_LABEL[attrs.statistic.name as StatisticName] ?? 'θ̂'} = </span>
             <span className="tabular">{formatNumber(out.response.estimate, out.response.se)}</span>
             {out.response.se !== null && <span className="ml-2 text-lg text-ink-soft">(SE {formatNumber(out.response.se, out.response.se)})</span>}
             {state.stale && <span className="ml-3 align-middle font-sans text-xs text-amber">stale — recomputing</span>}
@@ -70,7 +70,13 @@ export function EstimateSettingsForm(props: { attrs: EstimateAttrs; set: (p: Par
           label="Dataset"
           value={attrs.dataset ? String(attrs.dataset.datasetId) : ''}
           options={props.datasets.map((d) => ({ value: String(d.id), label: d.name }))}
-          onChange={(v) => set({ dataset: { datasetId: Number(v), versionId: null } })}
+          onChange={(v) => {
+            // Columns of the old dataset rarely exist in the new one: start from its first numeric column.
+            const d = props.datasets.find((x) => x.id === Number(v));
+            const first = d?.columns.find((c) => c.type === 'number')?.name ?? '';
+            const keep = statisticColumns(s).every((c) => d?.columns.some((x) => x.name === c));
+            set({ dataset: { datasetId: Number(v), versionId: null }, filter: null, scheme: { name: 'ordinary' }, statistic: keep ? s : changeStatistic({ name: 'median', column: first }, s.name) });
+          }}
           disabled={disabled}
         />
         <SelectField

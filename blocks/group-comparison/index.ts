@@ -15,12 +15,14 @@ export const groupComparison: BlockDefinition<GroupComparisonAttrs, GroupCompari
   node: defineBlockNode('group-comparison', DEFAULTS),
   attrs: groupComparisonAttrs,
   newAttrs(ctx) {
-    const ds = ctx.datasets[0];
+    // Two groups need a text column to name them: prefer a dataset that has one.
+    const ds = ctx.datasets.find((d) => d.columns.some((c) => c.type === 'text') && d.columns.some((c) => c.type === 'number')) ?? ctx.datasets[0];
     return {
       ...DEFAULTS,
       dataset: ds ? { datasetId: ds.id, versionId: null } : null,
       value: ds?.columns.find((c) => c.type === 'number')?.name ?? '',
       group: ds?.columns.find((c) => c.type === 'text')?.name ?? '',
+      levels: [ds?.columns.find((c) => c.type === 'text')?.values?.[0] ?? '', ds?.columns.find((c) => c.type === 'text')?.values?.[1] ?? ''],
       seed: newSeed(),
     };
   },

@@ -34,7 +34,11 @@ export function GroupComparisonView(props: NodeViewProps) {
       <details open={editable}>
         <summary className="cursor-pointer text-sm text-river select-none">Settings</summary>
         <div className="mt-2 grid grid-cols-2 gap-3 md:grid-cols-4">
-          <SelectField label="Dataset" value={attrs.dataset ? String(attrs.dataset.datasetId) : ''} options={ctx.datasets.map((d) => ({ value: String(d.id), label: d.name }))} onChange={(v) => set({ dataset: { datasetId: Number(v), versionId: null } })} disabled={disabled} />
+          <SelectField label="Dataset" value={attrs.dataset ? String(attrs.dataset.datasetId) : ''} options={ctx.datasets.map((d) => ({ value: String(d.id), label: d.name }))} onChange={(v) => {
+              const d = ctx.datasets.find((x) => x.id === Number(v));
+              const text = d?.columns.find((c) => c.type === 'text');
+              set({ dataset: { datasetId: Number(v), versionId: null }, value: d?.columns.find((c) => c.type === 'number')?.name ?? '', group: text?.name ?? '', levels: [text?.values?.[0] ?? '', text?.values?.[1] ?? ''] });
+            }} disabled={disabled} />
           <SelectField label="Values" value={attrs.value} options={cols.filter((c) => c.type === 'number').map((c) => ({ value: c.name, label: c.name }))} onChange={(v) => set({ value: v })} disabled={disabled} />
           <SelectField
             label="Groups in"

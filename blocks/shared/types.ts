@@ -12,7 +12,7 @@ export type FindBlock = (blockId: string) => DocBlock | undefined;
 /** What the insert menu knows when it makes a new block. */
 export interface InsertContext {
   /** The lab's datasets, newest first (the first is offered by default). */
-  datasets: { id: number; name: string; columns: { name: string; type: string }[] }[];
+  datasets: { id: number; name: string; columns: { name: string; type: string; values?: string[] }[] }[];
   /** The Estimate blocks already in the memo (for blocks that show an Estimate's replicates). */
   estimates: { blockId: string; label: string }[];
 }

@@ -13,7 +13,8 @@ export function InsertMenu({ editor, datasets }: { editor: Editor; datasets: Pic
   const insert = (k: number) => {
     const def = CLIENT_BLOCKS[k].definition;
     const attrs = def.newAttrs({ datasets, estimates: estimatesOf(docBlocks(editor)) });
-    editor.chain().focus().insertContent({ type: def.type, attrs: { blockId: newBlockId(), ...attrs } }).run();
+    // A paragraph after the block takes the cursor, so the next insert goes below instead of replacing the selected block.
+    editor.chain().focus().insertContent([{ type: def.type, attrs: { blockId: newBlockId(), ...attrs } }, { type: 'paragraph' }]).run();
     setOpen(false);
   };
   return (

@@ -44,7 +44,7 @@ export const seedMemos: SeedStep = async ({ labId, userIds }) => {
       p(t('On average downstream exceeds upstream by '), live('demo-sites', 'difference'), t(' mg/L (95% BCa interval '), live('demo-sites', 'difference-interval'), t('), resampling within each site.')),
       { type: 'group-comparison', attrs: { blockId: 'demo-sites', dataset: ref(samples.id), value: 'nitrate_mg_l', group: 'site', levels: ['downstream', 'upstream'], statistic: 'mean', B: 2000, seed: 'riverside-sites', level: 0.95, method: 'bca' } },
       h('The daily series'),
-      p(t('Daily downstream readings average '), live('demo-daily', 'estimate'), t(' mg/L (95% percentile interval '), live('demo-daily', 'interval:percentile'), t('). Consecutive days are alike, so read the warnings under the block before quoting this interval.')),
+      p(t('Daily downstream readings average '), live('demo-daily', 'estimate'), t(' mg/L (95% percentile interval '), live('demo-daily', 'interval:percentile'), t('). Consecutive days are alike, so check the resampling scheme and the warnings under the block before quoting this interval.')),
       { type: 'estimate', attrs: { ...ESTIMATE_DEFAULTS, blockId: 'demo-daily', dataset: ref(daily.id), filter: null, statistic: { name: 'mean', column: 'nitrate_mg_l' }, scheme: seriesScheme, B: 2000, seed: 'riverside-daily', methods: ['percentile'] } },
     ],
   };
