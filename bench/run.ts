@@ -7,10 +7,10 @@
 // (GNU time's maximum resident set size of the process tree) and the ratios, with targets
 // R/Margin ≥ 10, scipy/Margin ≥ 5, Margin peak RSS < 300 MB. Results go to bench/results/.
 //
-//   npm run bench                 (REPS=5 Margin runs, RREPS=3 R and scipy runs by default)
+//   npm run bench                 (RREPS=3 rounds; REPS=6 Margin runs in all, by default)
 import { execFileSync, spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
-import { availableParallelism, tmpdir } from 'node:os';
+import { availableParallelism, loadavg, tmpdir } from 'node:os';
 import path from 'node:path';
 import { createRng } from '@/lib/resampling';
 import { measureFloor } from './resampling/floor';
@@ -18,7 +18,7 @@ import { measureFloor } from './resampling/floor';
 const root = process.cwd();
 const n = Number(process.env.N ?? 10_000);
 const B = Number(process.env.B ?? 10_000);
-const reps = Number(process.env.REPS ?? 5);
+const reps = Number(process.env.REPS ?? 6);
 const slowReps = Number(process.env.RREPS ?? 3);
 const hasTime = existsSync('/usr/bin/time');
 
@@ -57,27 +57,13 @@ function median(v: number[]): number {
   return s.length % 2 ? s[(s.length - 1) / 2] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
 }
 
-function series(label: string, count: number, f: () => Run): { seconds: number; rssMB: number | null; runs: number[]; out: string } {
-  const runs: Run[] = [];
-  for (let i = 0; i < count; i++) {
-    runs.push(f());
-    process.stdout.write(`  ${label} run ${i + 1}/${count}: ${runs[i].seconds.toFixed(3)} s${runs[i].rssMB ? `, ${runs[i].rssMB!.toFixed(0)} MB` : ''}\n`);
-  }
-  const rss = runs.map((r) => r.rssMB).filter((v): v is number => v !== null);
-  return { seconds: median(runs.map((r) => r.seconds)), rssMB: rss.length ? Math.max(...rss) : null, runs: runs.map((r) => r.seconds), out: runs[0].out };
-}
 
 console.log(`Resampling benchmark: median, n = ${n}, B = ${B}, percentile interval; ${process.env.HOSTNAME ?? 'this machine'}, ${os()} cores`);
 console.log('building the engine bundle (not timed) …');
 execFileSync(process.execPath, [path.join(root, 'lib/compute/build-engine.mjs')], { cwd: root });
 timed('npm', ['run', '-s', 'compute', '--', requestFile]); // warm the file cache
 
-const margin = series('margin', reps, () => timed('npm', ['run', '-s', 'compute', '--', requestFile]));
-const marginOut = JSON.parse(margin.out);
-
 const rAvailable = spawnSync('Rscript', ['-e', 'library(boot)'], { encoding: 'utf8' }).status === 0;
-const r = rAvailable ? series('R boot', slowReps, () => timed('Rscript', [path.join(root, 'bench/resampling/boot.R'), dataFile, String(B), '1'])) : null;
-
 const scipyEnv = { ...process.env };
 const unsetBlas = 'OPENBLAS_CORETYPE' in scipyEnv;
 if (unsetBlas) {
@@ -85,8 +71,34 @@ if (unsetBlas) {
   delete scipyEnv.OPENBLAS_L2_SIZE;
 }
 const pyAvailable = spawnSync('/usr/bin/python3', ['-c', 'import scipy.stats'], { encoding: 'utf8' }).status === 0;
-const scipyDefault = pyAvailable ? series('scipy (batch default)', slowReps, () => timed('/usr/bin/python3', [path.join(root, 'bench/resampling/scipy_bench.py'), dataFile, String(B), '1', 'none'], scipyEnv)) : null;
-const scipyBatch = pyAvailable ? series('scipy (batch 1000)', slowReps, () => timed('/usr/bin/python3', [path.join(root, 'bench/resampling/scipy_bench.py'), dataFile, String(B), '1', '1000'], scipyEnv)) : null;
+
+// Rounds interleave the programs, so that load from anything else on the machine falls on all
+// of them alike; Margin runs `reps / slowReps` times per round.
+const runs: Record<string, Run[]> = { margin: [], r: [], scipyDefault: [], scipyBatch: [] };
+const perRound = Math.max(1, Math.round(reps / slowReps));
+for (let round = 0; round < slowReps; round++) {
+  const step = (key: string, label: string, f: () => Run) => {
+    const x = f();
+    runs[key].push(x);
+    process.stdout.write(`  round ${round + 1}/${slowReps} ${label}: ${x.seconds.toFixed(3)} s${x.rssMB ? `, ${x.rssMB.toFixed(0)} MB` : ''}\n`);
+  };
+  for (let i = 0; i < perRound; i++) step('margin', 'margin', () => timed('npm', ['run', '-s', 'compute', '--', requestFile]));
+  if (rAvailable) step('r', 'R boot', () => timed('Rscript', [path.join(root, 'bench/resampling/boot.R'), dataFile, String(B), '1']));
+  if (pyAvailable) {
+    step('scipyDefault', 'scipy (batch default)', () => timed('/usr/bin/python3', [path.join(root, 'bench/resampling/scipy_bench.py'), dataFile, String(B), '1', 'none'], scipyEnv));
+    step('scipyBatch', 'scipy (batch 1000)', () => timed('/usr/bin/python3', [path.join(root, 'bench/resampling/scipy_bench.py'), dataFile, String(B), '1', '1000'], scipyEnv));
+  }
+}
+const summary = (list: Run[]) => {
+  if (!list.length) return null;
+  const rss = list.map((r) => r.rssMB).filter((v): v is number => v !== null);
+  return { seconds: median(list.map((r) => r.seconds)), rssMB: rss.length ? Math.max(...rss) : null, runs: list.map((r) => r.seconds), out: list[0].out };
+};
+const margin = summary(runs.margin)!;
+const marginOut = JSON.parse(margin.out);
+const r = summary(runs.r);
+const scipyDefault = summary(runs.scipyDefault);
+const scipyBatch = summary(runs.scipyBatch);
 const scipyBest = scipyDefault && scipyBatch ? (scipyBatch.seconds < scipyDefault.seconds ? scipyBatch : scipyDefault) : (scipyDefault ?? scipyBatch);
 
 console.log('measuring the floor (index draws alone, one thread) …');
@@ -99,7 +111,7 @@ const rows = [
   ['scipy bootstrap, batch default', scipyDefault?.seconds ?? null, scipyDefault?.rssMB ?? null, scipyDefault?.out ?? 'not available'],
   ['scipy bootstrap, batch 1000', scipyBatch?.seconds ?? null, scipyBatch?.rssMB ?? null, scipyBatch?.out ?? 'not available'],
 ] as const;
-console.log('\nwhole process, median of runs:');
+console.log(`\nwhole process, median of runs (load average at the end: ${loadavg().map((v) => v.toFixed(1)).join(' ')}):`);
 for (const [label, s, rss, out] of rows) console.log(`  ${label.padEnd(32)} ${fmt(s as number | null, 3).padStart(7)} s   peak RSS ${fmt(rss as number | null, 0).padStart(5)} MB   ${out}`);
 
 const ratioR = r ? r.seconds / margin.seconds : null;

@@ -10,6 +10,7 @@ import {
   parseRequest,
   prepareProblem,
   type Problem,
+  runChunk,
 } from '@/lib/resampling';
 import { EnginePool } from './pool';
 import { workerFile } from './worker-file';
@@ -83,7 +84,7 @@ async function drawInWorkers(problem: Problem, threads: number, opts: ComputeOpt
     const [a, b] = chunkRange(B, k);
     return b - a;
   });
-  const results = await pool.run(problem.request, sizes, { signal: opts.signal, onProgress: opts.onProgress });
+  const results = await pool.run(problem.request, sizes, { signal: opts.signal, onProgress: opts.onProgress, inline: (k) => runChunk(problem, k) });
   const theta = new Float64Array(B);
   const withInner = results[0]?.innerSe != null;
   const innerSe = withInner ? new Float64Array(B) : null;

@@ -22,6 +22,7 @@ interface Job {
 interface Slot {
   worker: Worker;
   ready: Promise<void>;
+  isReady: boolean;
   busy: { job: number; k: number } | null;
   seen: Set<number>;
 }
@@ -45,7 +46,11 @@ export class EnginePool {
   ) {}
 
   /** Draws the given chunks of a request; resolves with one result per chunk, in chunk order. */
-  run(request: EngineRequest, chunkSizes: number[], opts: { signal?: AbortSignal; onProgress?: (done: number, total: number) => void } = {}): Promise<(FromWorker & { type: 'done' })[]> {
+  run(
+    request: EngineRequest,
+    chunkSizes: number[],
+    opts: { signal?: AbortSignal; onProgress?: (done: number, total: number) => void; inline?: (k: number) => { theta: Float64Array; innerSe: Float64Array | null } } = {},
+  ): Promise<(FromWorker & { type: 'done' })[]> {
     return new Promise((resolve, reject) => {
       const id = this.nextId++;
       const job: Job = {
@@ -80,7 +85,38 @@ export class EnginePool {
       for (let k = 0; k < chunkSizes.length; k++) this.queue.push({ job, k });
       this.ensureSlots();
       this.dispatch();
+      if (opts.inline) void this.helpWhileStarting(job, opts.inline);
     });
+  }
+
+  /**
+   * While no worker has started yet (a fresh process), the calling thread draws chunks of
+   * the job itself, yielding between chunks so worker messages are handled; it stops as soon
+   * as a worker is ready, so the cores are not oversubscribed.
+   */
+  private async helpWhileStarting(job: Job, inline: (k: number) => { theta: Float64Array; innerSe: Float64Array | null }): Promise<void> {
+    while (!job.done && !this.slots.some((s) => s.isReady)) {
+      const at = this.queue.findIndex((t) => t.job === job);
+      if (at < 0) return;
+      const [task] = this.queue.splice(at, 1);
+      try {
+        const r = inline(task.k);
+        this.accept(job, { type: 'done', job: job.id, k: task.k, theta: r.theta, innerSe: r.innerSe });
+      } catch (e) {
+        this.fail(job, e);
+        return;
+      }
+      await new Promise<void>((resolve) => setImmediate(resolve));
+    }
+  }
+
+  private accept(job: Job, msg: FromWorker & { type: 'done' }): void {
+    if (job.done) return;
+    job.results[msg.k] = msg;
+    job.pending--;
+    job.replicatesDone += job.chunkSizes[msg.k];
+    job.onProgress?.(job.replicatesDone, job.total);
+    if (job.pending === 0) this.complete(job);
   }
 
   /** Starts the workers now (they load the engine while the caller reads its input). */
@@ -102,10 +138,11 @@ export class EnginePool {
   private spawn(): Slot {
     const worker = new Worker(this.file);
     let markReady!: () => void;
-    const slot: Slot = { worker, ready: new Promise<void>((r) => (markReady = r)), busy: null, seen: new Set() };
+    const slot: Slot = { worker, ready: new Promise<void>((r) => (markReady = r)), isReady: false, busy: null, seen: new Set() };
     worker.unref();
     worker.on('message', (msg: FromWorker) => {
       if (msg.type === 'ready') {
+        slot.isReady = true;
         markReady();
         return;
       }
@@ -139,13 +176,7 @@ export class EnginePool {
       if (msg.type === 'error') {
         const e = msg.error.name === 'EngineError' ? new EngineError(msg.error.code ?? 'internal:engine', msg.error.message, msg.error.path ?? '') : new Error(msg.error.message);
         this.fail(job, e);
-      } else {
-        job.results[msg.k] = msg;
-        job.pending--;
-        job.replicatesDone += job.chunkSizes[msg.k];
-        job.onProgress?.(job.replicatesDone, job.total);
-        if (job.pending === 0) this.complete(job);
-      }
+      } else this.accept(job, msg);
     }
     this.dispatch();
   }
