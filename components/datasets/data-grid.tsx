@@ -37,7 +37,9 @@ export function DataGrid({ labId, datasetId, version, rowCount, columns }: Props
   const scaled = natural > MAX_SCROLL_PX;
   const height = scaled ? MAX_SCROLL_PX : natural;
   const visible = Math.ceil(VIEW_HEIGHT / ROW_HEIGHT);
-  const maxStart = Math.max(0, rowCount - visible);
+  // Rows that fit whole in the view: the last start shows the last row entirely.
+  const fit = Math.floor(VIEW_HEIGHT / ROW_HEIGHT);
+  const maxStart = Math.max(0, rowCount - fit);
 
   const start = scaled ? Math.min(maxStart, Math.floor((scrollTop / Math.max(1, height - VIEW_HEIGHT)) * maxStart)) : Math.floor(scrollTop / ROW_HEIGHT);
   const from = Math.max(0, start - OVERSCAN);
@@ -84,7 +86,7 @@ export function DataGrid({ labId, datasetId, version, rowCount, columns }: Props
     <div className="rounded-lg border border-paper-edge bg-white">
       <div className="flex items-center justify-between gap-3 border-b border-paper-edge px-3 py-2 text-sm">
         <p className="text-ink-soft tabular" aria-live="polite">
-          Rows {rowCount === 0 ? 0 : (start + 1).toLocaleString('en')}–{Math.min(rowCount, start + visible).toLocaleString('en')} of {rowCount.toLocaleString('en')}
+          Rows {rowCount === 0 ? 0 : (start + 1).toLocaleString('en')}–{Math.min(rowCount, start + fit).toLocaleString('en')} of {rowCount.toLocaleString('en')}
         </p>
         <form
           className="flex items-center gap-2"
