@@ -82,7 +82,8 @@ export function prepareProblem(request: EngineRequest): Problem {
         out[r] = null;
         missing[r] = 1;
         missingIn.add(c.column);
-      } else out[r] = String(v);
+      } else if (typeof v === 'string' || typeof v === 'number' || typeof v === 'boolean') out[r] = String(v);
+      else throw new EngineError('invalid:data', `data.${c.column}[${r}] must be a text label, a number or null`, `data.${c.column}[${r}]`);
     }
     labelValues.set(c.column, out);
   }
