@@ -2,7 +2,7 @@
 
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { NodeViewProps } from '@tiptap/react';
-import { useState } from 'react';
+import { useRef, useState } from 'react';
 import { api } from '@/components/editor/api';
 import { BlockFrame } from '@/components/editor/block-frame';
 import { SelectField } from '@/components/editor/fields';
@@ -43,9 +43,14 @@ export function DataTableView(props: NodeViewProps) {
   const table = useQuery({ queryKey: ['table', url, epoch], enabled: !!url, queryFn: ({ signal }) => api<TablePage>(url!, { signal }), placeholderData: (prev) => prev, staleTime: 30_000 });
   const page = table.data;
 
+  // Edits run one after another (one mutation scope per block), each on the version the
+  // previous one made, even before the table has been fetched again.
+  const lastSaved = useRef<{ datasetId: number; versionId: number } | null>(null);
+  const baseVersion = () => (lastSaved.current && lastSaved.current.datasetId === page!.datasetId && lastSaved.current.versionId > page!.versionId ? lastSaved.current.versionId : page!.versionId);
   const edit = useMutation({
+    scope: { id: `table-${blockId}` },
     mutationFn: (e: { row: number; column: string; value: string }) =>
-      api<{ versionId: number; version: number }>(`/api/labs/${ctx.labId}/memos/${ctx.memoId}/table`, { method: 'POST', json: { datasetId: page!.datasetId, baseVersionId: page!.versionId, edits: [e] } }),
+      api<{ versionId: number; version: number }>(`/api/labs/${ctx.labId}/memos/${ctx.memoId}/table`, { method: 'POST', json: { datasetId: page!.datasetId, baseVersionId: baseVersion(), edits: [e] } }),
     onMutate: (e) => {
       // Show the new value at once; the server's new version replaces it when it lands.
       client.setQueryData(['table', url, epoch], (old: TablePage | undefined) => {
@@ -58,6 +63,7 @@ export function DataTableView(props: NodeViewProps) {
       });
     },
     onSuccess: (r) => {
+      lastSaved.current = { datasetId: page!.datasetId, versionId: r.versionId };
       if (ref && ref.versionId !== null) props.updateAttributes({ dataset: { datasetId: ref.datasetId, versionId: r.versionId } });
       ctx.store.datasetChanged(page!.datasetId, r.versionId);
     },

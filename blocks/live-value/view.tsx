@@ -34,6 +34,7 @@ export function LiveValueView(props: NodeViewProps) {
       data-block={attrs.block ?? ''}
       data-output={attrs.output}
       data-stale={stale ? 'true' : 'false'}
+      data-run={result?.shown?.id ?? ''}
       title={`${label}${stale ? ' — stale: its block is recomputing or needs settings' : ' — live from its block'}`}
       className={`relative mx-0.5 inline-flex items-baseline rounded px-1 font-mono text-[0.92em] tabular ${stale ? 'bg-amber-wash text-amber underline decoration-dotted underline-offset-4' : 'bg-river-wash text-river'} ${props.selected ? 'ring-2 ring-river/40' : ''}`}
     >
