@@ -3,7 +3,7 @@
  * given seed. See PRODUCT.md ("The engine's request and response") for the contract.
  */
 export { parseRequest } from './contract/parse';
-export type { Advice, ConvergencePoint, EngineResponse, ExactResult, IntervalResult, JackknifeResult, Warning } from './contract/response';
+export type { Advice, ConvergencePoint, EngineResponse, ExactResult, IntervalResult, JackknifeResult, TestResult, Warning } from './contract/response';
 export { engineRequestSchema, INCLUDE_PARTS, INTERVAL_METHODS } from './contract/schema';
 export type { EngineRequest, EngineRequestInput, IntervalMethod } from './contract/schema';
 export { canonicalJson } from './data/canonical-json';

@@ -1,12 +1,13 @@
 import { EngineError, formatPath } from '../errors';
 import { PLANNED_SCHEMES, SCHEMES, schemeNames } from '../schemes/registry';
 import { STATISTICS, statisticNames } from '../statistics/registry';
+import { TEST_NAMES } from '../hypothesis/test-schema';
 import { type EngineRequest, engineRequestSchema } from './schema';
 
 /**
  * Validates a request and returns it with defaults filled in. Throws EngineError naming
- * the field: `invalid:request` for a malformed field, `unsupported:scheme` /
- * `unsupported:test` for parts of the contract this engine version does not run yet.
+ * the field: `invalid:request` for a malformed field, `unsupported:scheme`
+ * for parts of the contract this engine version does not run yet.
  */
 export function parseRequest(input: unknown): EngineRequest {
   if (input === null || typeof input !== 'object' || Array.isArray(input)) {
@@ -15,10 +16,7 @@ export function parseRequest(input: unknown): EngineRequest {
   const raw = input as Record<string, unknown>;
   checkName(raw.statistic, 'statistic', STATISTICS, statisticNames(), [], true);
   checkName(raw.scheme, 'scheme', SCHEMES, schemeNames(), PLANNED_SCHEMES, false);
-  if (raw.test !== undefined) {
-    const name = raw.test && typeof raw.test === 'object' ? (raw.test as { name?: unknown }).name : undefined;
-    throw new EngineError('unsupported:test', `tests${typeof name === 'string' ? ` ("${name}")` : ''} are not available in this engine version yet`, 'test');
-  }
+  if (raw.test !== undefined) checkName(raw.test, 'test', new Map(TEST_NAMES.map((t) => [t, t])), [...TEST_NAMES], [], true);
   const parsed = engineRequestSchema.safeParse(raw);
   if (!parsed.success) {
     const issue = parsed.error.issues[0];

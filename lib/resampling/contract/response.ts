@@ -50,6 +50,25 @@ export interface Advice {
   message: string;
 }
 
+/** Result of the request's `test` (permutation or bootstrap-mean), see hypothesis/run-test.ts. */
+export interface TestResult {
+  name: 'permutation' | 'bootstrap-mean';
+  alternative: 'two-sided' | 'less' | 'greater';
+  pValue: number;
+  method: 'exact' | 'monte-carlo';
+  /** Relabellings / resamples at least as extreme as the observed statistic. */
+  count: number;
+  /** Relabellings enumerated (exact) or drawn (Monte Carlo) with a defined statistic. */
+  total: number;
+  /** √(p(1 − p)/B) for Monte Carlo, 0 when exact. */
+  monteCarloError: number;
+  /** The observed test statistic (the two-group statistic; t for bootstrap-mean). */
+  observed: number;
+  nullValue?: number;
+  note?: string;
+  undefinedRelabellings?: number;
+}
+
 export interface EngineResponse {
   estimate: number;
   B: number;
@@ -68,6 +87,10 @@ export interface EngineResponse {
   convergence: ConvergencePoint[] | null;
   advice: Advice;
   warnings: Warning[];
+  /** The scheme used and what it resolved: block length chosen, fitted parameters, clusters, residuals. */
+  scheme: { name: string } & Record<string, unknown>;
+  /** The request's hypothesis test, or null when none was asked. */
+  test: TestResult | null;
   provenance: {
     engine: string;
     rng: string;

@@ -1,6 +1,7 @@
 import * as z from 'zod';
 import { schemeSchema } from '../schemes/registry';
 import { statisticSchema } from '../statistics/registry';
+import { testSchema } from '../hypothesis/test-schema';
 
 /**
  * The engine's request (see PRODUCT.md, "The engine's request and response"). Limits on
@@ -57,8 +58,8 @@ export const engineRequestSchema = z.strictObject({
     .array(z.enum(INCLUDE_PARTS, { error: `include may list ${INCLUDE_PARTS.join(', ')}` }))
     .default([])
     .transform((m) => [...new Set(m)]),
-  /** Permutation tests (issue 4) — parsed here so that the name can be refused clearly. */
-  test: z.looseObject({ name: z.string() }).optional(),
+  /** A hypothesis test to run beside the bootstrap (permutation, bootstrap-mean): hypothesis/test-schema.ts. */
+  test: testSchema.optional(),
 });
 
 export type EngineRequest = z.output<typeof engineRequestSchema>;

@@ -5,17 +5,25 @@ import { extremeStatistic } from './extreme-statistic';
 import { heavyTies } from './heavy-ties';
 import { intervalNotes } from './interval-notes';
 import { nonSmoothJackknife } from './non-smooth-jackknife';
+import { regressionDesign } from './regression-design';
+import { repeatedIdColumns } from './repeated-ids';
 import { replicateOutliers } from './replicate-outliers';
+import { serialCorrelation } from './serial-correlation';
 import { skewedReplicates } from './skewed-replicates';
 import { smallB } from './small-b';
 import { smallSample } from './small-sample';
 import type { Diagnostic, DiagnosticContext } from './types';
 import { undefinedReplicates } from './undefined-replicates';
+import { zeroVarianceGroup } from './zero-variance-group';
 
 /** Every diagnostic, in the order its warning is listed. */
 export const DIAGNOSTICS: readonly Diagnostic[] = [
   droppedValues,
   smallSample,
+  serialCorrelation,
+  repeatedIdColumns,
+  zeroVarianceGroup,
+  regressionDesign,
   heavyTies,
   extremeStatistic,
   undefinedReplicates,

@@ -15,6 +15,7 @@ import { seMonteCarloError } from '../montecarlo/se-error';
 import { createRng, RNG_NAME } from '../random/rng';
 import { CHUNK_SIZE } from '../replicates/chunks';
 import { ENGINE_VERSION } from '../version';
+import { runTest } from '../hypothesis/run-test';
 import { convergenceSeries } from './convergence';
 import type { Problem } from './problem';
 
@@ -139,6 +140,8 @@ export function finalize(problem: Problem, theta: Float64Array, innerSe: Float64
     convergence: req.include.includes('convergence') ? convergenceSeries(theta, innerT, estimate, level, methods, acceleration, se0, finite) : null,
     advice: adviseB(sorted.length, se, m?.excessKurtosis ?? 0, endPointErrors),
     warnings,
+    scheme: { name: req.scheme.name, ...problem.scheme.details },
+    test: runTest(problem),
     provenance: {
       engine: ENGINE_VERSION,
       rng: `${RNG_NAME}; replicates in chunks of ${CHUNK_SIZE}, chunk k seeded with seed + "\\u001fchunk:k"; indices by Lemire's unbiased multiply-and-reject`,

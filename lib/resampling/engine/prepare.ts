@@ -175,6 +175,12 @@ export function prepareProblem(request: EngineRequest): Problem {
         if (!all) throw new EngineError('invalid:request', `column "${column}" was not read`, 'scheme');
         return Array.from(rows, (r) => all[r]!);
       },
+      data: statData,
+      evaluate: (d) => statisticDef.prepare(d, settings).estimate,
+      statisticName: statisticDef.name,
+      columnOf: (role) => columnOfRole.get(role) ?? role,
+      rowOf: (unit) => rows[unit],
+      groupLevels: group?.levels,
     },
     request.scheme,
   );
@@ -193,6 +199,9 @@ export function prepareProblem(request: EngineRequest): Problem {
     droppedColumns: [...missingIn],
     strata,
     groupSizes,
+    groupLevels: group?.levels ?? null,
+    columnOf: (role) => columnOfRole.get(role) ?? role,
+    usedColumns: used.map((u) => u.column),
     description: statisticDef.describe(settings),
   };
 }

@@ -20,5 +20,11 @@ export interface Problem {
   strata: readonly Int32Array[];
   /** Sizes of the two groups (two-group statistics). */
   groupSizes: [number, number] | null;
+  /** The two levels of a two-group statistic, in group order. */
+  groupLevels: readonly [string, string] | null;
+  /** Request column of a numeric role (`x` → the column's name). */
+  columnOf(role: string): string;
+  /** Every column the statistic and the scheme read. */
+  usedColumns: string[];
   description: string;
 }

@@ -107,10 +107,10 @@ describe('bad input: a clear EngineError naming the field', () => {
     ['undefined estimate', { data: { x: [2, 2, 2], y: [1, 2, 3] }, statistic: { name: 'regression-slope', x: 'x', y: 'y' } }, 'invalid:data', 'statistic'],
     ['one finite value', { data: { x: [1, null, Number.POSITIVE_INFINITY] }, statistic: { name: 'mean', column: 'x' } }, 'invalid:data', 'data.x'],
     ['trim of 0.5', { ...base, statistic: { name: 'trimmed-mean', column: 'x', trim: 0.5 } }, 'invalid:request', 'statistic.trim'],
-    ['planned scheme', { ...base, scheme: { name: 'moving-block', blockLength: 5 } }, 'unsupported:scheme', 'scheme.name'],
+    ['block length not below n', { ...base, scheme: { name: 'moving-block', blockLength: 5 } }, 'invalid:request', 'scheme.blockLength'],
     ['unknown scheme', { ...base, scheme: { name: 'jumble' } }, 'invalid:request', 'scheme.name'],
     ['stratified without by', { ...base, scheme: { name: 'stratified' } }, 'invalid:request', 'scheme.by'],
-    ['permutation test (not yet)', { ...base, test: { name: 'permutation' } }, 'unsupported:test', 'test'],
+    ['permutation test of a one-group statistic', { ...base, test: { name: 'permutation' } }, 'invalid:request', 'test.name'],
     ['unknown top-level field', { ...base, replicates: 5 }, 'invalid:request', ''],
   ];
   for (const [label, input, code, path] of cases) {

@@ -1,6 +1,6 @@
 import type { z } from 'zod';
 import type { Rng } from '../random/rng';
-import type { PreparedStatistic } from '../statistics/types';
+import type { PreparedStatistic, StatisticData } from '../statistics/types';
 
 /**
  * How resampling schemes plug into the engine. A scheme is one file exporting a
@@ -18,6 +18,17 @@ export interface SchemeContext {
   n: number;
   /** Cleaned label column for each unit (the columns named by `labelColumns`). */
   labels(column: string): string[];
+  /** The cleaned data the statistic was prepared on (block lengths, model fits, regression). */
+  data: StatisticData;
+  /** θ on new data of the same shape — for schemes that make new values (parametric, residual). */
+  evaluate(data: StatisticData): number;
+  /** The statistic's name (`mean`, `regression-slope`, …). */
+  statisticName: string;
+  /** Request column of a numeric role, and original row of a unit, for messages. */
+  columnOf(role: string): string;
+  rowOf(unit: number): number;
+  /** Two-group statistics: the two levels, in the order of `statistic.groups`. */
+  groupLevels?: readonly [string, string];
 }
 
 export interface CountingScheme {
@@ -38,6 +49,8 @@ export interface PreparedScheme {
   readonly counting?: CountingScheme;
   /** Closed-form and order-statistic exact answers assume plain resampling of the sample. */
   readonly plainResampling: boolean;
+  /** Settings the scheme resolved (block length chosen, fitted parameters …), copied to the response's `scheme`. */
+  readonly details?: Record<string, unknown>;
 }
 
 export interface SchemeDefinition<S extends { name: string } = { name: string }, T extends z.ZodType = z.ZodType> {

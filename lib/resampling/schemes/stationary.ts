@@ -1,0 +1,45 @@
+import * as z from 'zod';
+import { addStationaryCounts } from '../structured/stationary-counts';
+import { chooseBlockLength } from './block-length-choice';
+import { seriesStrata } from './series-strata';
+import { defineScheme } from './types';
+
+/**
+ * Stationary bootstrap (Politis & Romano 1994): like the circular block bootstrap but with
+ * block lengths drawn from a geometric distribution with mean `meanBlockLength`
+ * (1 + Geometric(1/ℓ̄), as R's tsboot(sim = "geom")), which makes the resampled series
+ * stationary. `meanBlockLength: "auto"` uses the Politis & White (2004) rule with the
+ * Patton, Politis & White (2009) correction for the stationary bootstrap.
+ */
+const schema = z.strictObject({
+  name: z.literal('stationary'),
+  meanBlockLength: z
+    .union([z.number().min(1, 'meanBlockLength must be at least 1'), z.literal('auto')], { error: 'meanBlockLength must be a number of rows (at least 1) or "auto"' })
+    .default('auto'),
+});
+
+export const stationary = defineScheme({
+  name: 'stationary',
+  schema,
+  labelColumns: () => [],
+  prepare(ctx, s) {
+    const strata = seriesStrata(ctx);
+    const choice = chooseBlockLength(ctx, strata, s.meanBlockLength, 'stationary', 'scheme.meanBlockLength');
+    const l = choice.value;
+    const counts = new Int32Array(ctx.n);
+    return {
+      description: `stationary bootstrap, geometric block lengths with mean ${round(l)} rows${choice.method === 'auto' ? ' (chosen by the Politis–White rule)' : ''}${strata.length > 1 ? ', within each group' : ''}`,
+      plainResampling: false,
+      details: { variant: 'circular', meanBlockLength: l, blockLengthMethod: choice.method, ...(choice.auto ? { auto: choice.auto } : {}) },
+      replicate(rng) {
+        counts.fill(0);
+        for (const units of strata) addStationaryCounts(units, l, () => rng.double(), counts);
+        return ctx.statistic.fromCounts(counts, ctx.n);
+      },
+    };
+  },
+});
+
+function round(x: number): string {
+  return Number.isInteger(x) ? String(x) : x.toFixed(2);
+}
