@@ -55,7 +55,7 @@ describe('POST /api/compute', () => {
     const big = await post(JSON.stringify({ ...request, B: 5_000_000 }));
     expect(big.status).toBe(422);
     expect((await big.json()).error).toMatchObject({ code: 'limit:B', path: 'B' });
-    const planned = await post(JSON.stringify({ ...request, scheme: { name: 'cluster', by: 'site' } }));
-    expect((await planned.json()).error).toMatchObject({ code: 'unsupported:scheme', path: 'scheme.name' });
+    const noColumn = await post(JSON.stringify({ ...request, scheme: { name: 'cluster', by: 'site' } }));
+    expect((await noColumn.json()).error).toMatchObject({ code: 'invalid:request', path: 'scheme.by' });
   });
 });
