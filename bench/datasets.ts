@@ -73,6 +73,7 @@ try {
   let peak = rss0;
   let stall = 0;
   let stallPhase = '';
+  const stallBy: Record<string, number> = {};
   let phase = 'reading';
   let phaseStart = performance.now();
   let last = performance.now();
@@ -81,6 +82,7 @@ try {
     const s = now - last - 10;
     if (s > stall) stallPhase = phase;
     stall = Math.max(stall, s);
+    stallBy[phase] = Math.max(stallBy[phase] ?? 0, s);
     last = now;
     peak = Math.max(peak, process.memoryUsage().rss);
   }, 10);
@@ -119,6 +121,7 @@ try {
 
   console.log(`\ndatasets: ${ROWS.toLocaleString('en')} rows × 5 columns, ${(size / 1e6).toFixed(1)} MB of CSV, sha256 ${result.sha256.slice(0, 16)}…`);
   console.log(`phases: ${Object.entries(phases).map(([k, v]) => `${k} ${(v / 1000).toFixed(1)} s`).join(', ')}; ${(size / 1e6 / seconds).toFixed(1)} MB/s`);
+  console.log(`longest stall by phase: ${Object.entries(stallBy).map(([k, v]) => `${k} ${Math.max(0, v).toFixed(0)} ms`).join(', ')}`);
   line('import (read+summarise+hash+store)', seconds, 's', TARGET.seconds);
   line(`longest event-loop stall (${stallPhase})`, stall, 'ms', TARGET.stallMs);
   line('peak memory growth', (peak - rss0) / 1e6, 'MB', TARGET.memoryMb);

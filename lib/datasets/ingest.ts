@@ -2,10 +2,10 @@ import 'server-only';
 import { findDataset, findDatasetByName, nameTaken } from '@/db/queries/datasets';
 import { AppError } from '@/lib/errors';
 import type { ReadOptions } from './options';
-import { parseCsv, type ParseProgress } from './parse';
-import { storeTable, type StoredVersion, type StoreProgress } from './store';
+import { readCsvInWorker, type ReadProgress } from './read-in-worker';
+import { storePrepared, type StoredVersion, type StoreProgress } from './store';
 
-export type ImportProgress = ({ phase: 'reading' } & ParseProgress) | StoreProgress;
+export type ImportProgress = ReadProgress | StoreProgress;
 
 export interface ImportCsvInput {
   labId: number;
@@ -20,6 +20,8 @@ export interface ImportCsvInput {
   /** The Content-Length the client announced; fewer bytes arriving means a cut-off upload. */
   declaredBytes?: number;
   onProgress?: (p: ImportProgress) => void;
+  /** Aborted when the uploader cancels or goes away: the import stops and stores nothing. */
+  signal?: AbortSignal;
 }
 
 export interface ImportResult extends StoredVersion {
@@ -29,9 +31,10 @@ export interface ImportResult extends StoredVersion {
 
 /**
  * Reads a CSV upload and stores it as a new version — version 1 of a new dataset, or the
- * next version of an existing one. The file is parsed completely before anything is written,
- * and the write is one transaction, so a bad file or a failure part-way stores nothing.
- * The caller has authorized `dataset:write` on `labId`.
+ * next version of an existing one. The file is read, typed, summarised and hashed in a worker
+ * thread (read-in-worker.ts), completely, before anything is written; the write is one
+ * transaction, so a bad file, a cancel or a failure part-way stores nothing. The caller has
+ * authorized `dataset:write` on `labId`.
  */
 export async function importCsv(input: ImportCsvInput): Promise<ImportResult> {
   if (input.datasetId === undefined) {
@@ -41,17 +44,17 @@ export async function importCsv(input: ImportCsvInput): Promise<ImportResult> {
   } else if (!(await findDataset(input.labId, input.datasetId))) {
     throw new AppError('not_found:dataset', 'No such dataset in this lab.');
   }
-  const table = await parseCsv(input.body, input.options, { onProgress: (p) => input.onProgress?.({ phase: 'reading', ...p }) });
+  const table = await readCsvInWorker(input.body, input.options, { onProgress: input.onProgress, signal: input.signal });
   if (input.declaredBytes !== undefined && table.bytes !== input.declaredBytes) {
     throw new AppError('bad_request:dataset', `The upload was cut short: ${table.bytes} of ${input.declaredBytes} bytes arrived. Nothing was stored; please try again.`, 'file');
   }
   const target = input.datasetId !== undefined ? { datasetId: input.datasetId } : { newDataset: { labId: input.labId, name: input.name! } };
-  const stored = await storeTable(
+  const stored = await storePrepared(
     target,
     table,
     { kind: input.source.kind, ...(input.source.fileName ? { fileName: input.source.fileName } : {}), bytes: table.bytes, ...table.options },
     input.userId,
-    input.onProgress,
+    { onProgress: input.onProgress, signal: input.signal },
   );
   return { ...stored, options: table.options, bytes: table.bytes };
 }

@@ -2,13 +2,10 @@ import 'server-only';
 import { insertVersion, type VersionTarget } from '@/db/queries/datasets';
 import type { ColumnMeta, VersionSource } from '@/db/tables/datasets';
 import type { ParsedColumn } from './column-builder';
-import { encodeChunks } from './encode';
-import { hashTable } from './hash';
-import { CHUNK_ROWS } from './limits';
-import { columnMeta } from './summary';
+import { prepareTable, type PreparedTable, type PrepareProgress } from './prepare';
 import { TimeSlicer } from './time-slicer';
 
-export type StoreProgress = { phase: 'summarising'; done: number; total: number } | { phase: 'hashing' } | { phase: 'storing'; done: number; total: number };
+export type StoreProgress = PrepareProgress | { phase: 'storing'; done: number; total: number };
 
 export interface StoredVersion {
   datasetId: number;
@@ -22,6 +19,7 @@ export interface StoredVersion {
 /**
  * Summarises, hashes and stores a parsed table as the next version of a dataset (or as
  * version 1 of a new one), in one transaction: a failure at any point stores nothing.
+ * Uploads do the summarising and hashing in the datasets worker and call `storePrepared`.
  */
 export async function storeTable(
   target: VersionTarget,
@@ -30,25 +28,40 @@ export async function storeTable(
   userId: number | null,
   onProgress?: (p: StoreProgress) => void,
 ): Promise<StoredVersion> {
+  return storePrepared(target, await prepareTable(table, onProgress), source, userId, { onProgress });
+}
+
+/**
+ * Writes a prepared table in one transaction. `signal`: an abort before the commit (the
+ * uploader went away, or pressed Cancel) rolls everything back, so nothing is stored.
+ */
+export async function storePrepared(
+  target: VersionTarget,
+  prepared: PreparedTable,
+  source: VersionSource,
+  userId: number | null,
+  opts: { onProgress?: (p: StoreProgress) => void; signal?: AbortSignal } = {},
+): Promise<StoredVersion> {
+  const { onProgress, signal } = opts;
   const slicer = new TimeSlicer();
-  const columns: ColumnMeta[] = [];
-  for (const [j, col] of table.columns.entries()) {
-    onProgress?.({ phase: 'summarising', done: j, total: table.columns.length });
-    columns.push(columnMeta(col));
-    await slicer.maybeYield();
-  }
-  onProgress?.({ phase: 'hashing' });
-  const sha256 = await hashTable(table.columns, table.rowCount);
-  const perColumn = Math.max(1, Math.ceil(table.rowCount / CHUNK_ROWS));
-  const total = perColumn * table.columns.length;
+  const total = prepared.chunks.length;
   onProgress?.({ phase: 'storing', done: 0, total });
   let lastReport = 0;
-  const stored = await insertVersion(target, { sha256, rowCount: table.rowCount, chunkRows: CHUNK_ROWS, columns, source }, encodeChunks(table.columns, table.rowCount, CHUNK_ROWS), userId, async (done) => {
-    if (onProgress && (done === total || performance.now() - lastReport > 100)) {
-      lastReport = performance.now();
-      onProgress({ phase: 'storing', done, total });
-    }
-    await slicer.maybeYield();
-  });
-  return { ...stored, sha256, rowCount: table.rowCount, columns };
+  signal?.throwIfAborted();
+  const stored = await insertVersion(
+    target,
+    { sha256: prepared.sha256, rowCount: prepared.rowCount, chunkRows: prepared.chunkRows, columns: prepared.columns, source },
+    prepared.chunks,
+    userId,
+    async (done) => {
+      // Checked after every chunk, and so once more after the last one, just before the commit.
+      signal?.throwIfAborted();
+      if (onProgress && (done === total || performance.now() - lastReport > 100)) {
+        lastReport = performance.now();
+        onProgress({ phase: 'storing', done, total });
+      }
+      await slicer.maybeYield();
+    },
+  );
+  return { ...stored, sha256: prepared.sha256, rowCount: prepared.rowCount, columns: prepared.columns };
 }
