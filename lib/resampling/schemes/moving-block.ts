@@ -1,7 +1,9 @@
 import * as z from 'zod';
+import { movingBlockMean } from '../structured/block-sums';
 import { addMovingBlockCounts } from '../structured/moving-block-counts';
 import { chooseBlockLength } from './block-length-choice';
 import { seriesStrata } from './series-strata';
+import { meanFastPath } from './block-mean-fast-path';
 import { defineScheme } from './types';
 
 /**
@@ -31,13 +33,19 @@ export const movingBlock = defineScheme({
     const choice = chooseBlockLength(ctx, strata, s.blockLength, 'circular', 'scheme.blockLength');
     const l = choice.value;
     const counts = new Int32Array(ctx.n);
+    const fast = meanFastPath(ctx, strata);
     return {
       description: `moving-block bootstrap (circular), blocks of ${l} consecutive rows${choice.method === 'auto' ? ' (length chosen by the Politis–White rule)' : ''}${strata.length > 1 ? ', within each group' : ''}`,
       plainResampling: false,
       details: { variant: 'circular', blockLength: l, blockLengthMethod: choice.method, ...(choice.auto ? { auto: choice.auto } : {}) },
       replicate(rng) {
+        const random = () => rng.double();
+        if (fast) {
+          const a = movingBlockMean(fast[0], l, random);
+          return fast.length === 1 ? a : a - movingBlockMean(fast[1], l, random);
+        }
         counts.fill(0);
-        for (const units of strata) addMovingBlockCounts(units, l, () => rng.double(), counts);
+        for (const units of strata) addMovingBlockCounts(units, l, random, counts);
         return ctx.statistic.fromCounts(counts, ctx.n);
       },
     };

@@ -1,7 +1,9 @@
 import * as z from 'zod';
+import { stationaryMean } from '../structured/block-sums';
 import { addStationaryCounts } from '../structured/stationary-counts';
 import { chooseBlockLength } from './block-length-choice';
 import { seriesStrata } from './series-strata';
+import { meanFastPath } from './block-mean-fast-path';
 import { defineScheme } from './types';
 
 /**
@@ -27,13 +29,19 @@ export const stationary = defineScheme({
     const choice = chooseBlockLength(ctx, strata, s.meanBlockLength, 'stationary', 'scheme.meanBlockLength');
     const l = choice.value;
     const counts = new Int32Array(ctx.n);
+    const fast = meanFastPath(ctx, strata);
     return {
       description: `stationary bootstrap, geometric block lengths with mean ${round(l)} rows${choice.method === 'auto' ? ' (chosen by the Politis–White rule)' : ''}${strata.length > 1 ? ', within each group' : ''}`,
       plainResampling: false,
       details: { variant: 'circular', meanBlockLength: l, blockLengthMethod: choice.method, ...(choice.auto ? { auto: choice.auto } : {}) },
       replicate(rng) {
+        const random = () => rng.double();
+        if (fast) {
+          const a = stationaryMean(fast[0], l, random);
+          return fast.length === 1 ? a : a - stationaryMean(fast[1], l, random);
+        }
         counts.fill(0);
-        for (const units of strata) addStationaryCounts(units, l, () => rng.double(), counts);
+        for (const units of strata) addStationaryCounts(units, l, random, counts);
         return ctx.statistic.fromCounts(counts, ctx.n);
       },
     };

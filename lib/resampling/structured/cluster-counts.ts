@@ -37,3 +37,21 @@ export function addClusterCounts(
   }
   return total;
 }
+
+/**
+ * The first stage of addClusterCounts as cluster multiplicities: G draws with replacement
+ * from the G clusters, `out[offset + g]` counting how often cluster g was drawn; returns the
+ * number of rows in the resample. Exactly the draws addClusterCounts makes (without a second
+ * stage), so a caller can expand the multiplicities to row counts in one pass.
+ * Cost: O(G).
+ */
+export function addClusterMultiplicities(clusters: readonly ArrayLike<number>[], random: () => number, out: Int32Array, offset = 0): number {
+  const G = clusters.length;
+  let total = 0;
+  for (let g = 0; g < G; g++) {
+    const k = Math.floor(random() * G);
+    out[offset + k]++;
+    total += clusters[k].length;
+  }
+  return total;
+}

@@ -3,7 +3,8 @@
 // random source is passed in; no Node or DOM APIs.
 export { addMovingBlockCounts } from './moving-block-counts';
 export { addStationaryCounts } from './stationary-counts';
-export { addClusterCounts } from './cluster-counts';
+export { addClusterCounts, addClusterMultiplicities } from './cluster-counts';
 export { leastSquaresLine, type LeastSquaresLine } from './least-squares-line';
 export { residualPool, fillResidualResponse } from './residual-pool';
 export { bootstrapMeanTest, type BootstrapMeanTest, type MeanTestAlternative } from './bootstrap-mean-test';
+export { blockSums, movingBlockMean, stationaryMean, type BlockSums } from './block-sums';

@@ -1,0 +1,84 @@
+import seedrandom from 'seedrandom';
+import { describe, expect, it } from 'vitest';
+import { runRequest } from '../engine/run-request';
+import { prepare } from '../engine/run-request';
+import { STATISTICS } from '../statistics/registry';
+import { addClusterCounts } from '../structured/cluster-counts';
+import { clusterSums } from './cluster';
+import { strataFromKeys } from './counting';
+import type { SchemeContext } from './types';
+
+// Invented daily nitrate series (mg/L) with serial dependence, and readings at sites.
+const rng = seedrandom('structured-schemes');
+const daily: number[] = [];
+let level = 0;
+for (let t = 0; t < 300; t++) {
+  level = 0.6 * level + (rng() - 0.5);
+  daily.push(4 + level);
+}
+
+const same = (a: (number | null)[], b: (number | null)[]) => {
+  expect(a).toHaveLength(b.length);
+  for (let i = 0; i < a.length; i++) expect(Math.abs(a[i]! - b[i]!)).toBeLessThan(1e-12 * Math.abs(b[i]!));
+};
+
+describe('fast paths give the replicates of the count-based path', () => {
+  // trimmed-mean with trim 0 is the mean but has no fast path: the same resamples through counts.
+  const req = (statistic: object, scheme: object) => ({ data: { x: daily }, statistic, scheme, B: 600, seed: 'fast', include: ['replicates'] });
+  it.each([
+    { name: 'moving-block', blockLength: 7 },
+    { name: 'stationary', meanBlockLength: 4.5 },
+  ])('%o: mean by prefix sums = mean from counts', (scheme) => {
+    const fast = runRequest(req({ name: 'mean', column: 'x' }, scheme)).replicates!;
+    const slow = runRequest(req({ name: 'trimmed-mean', column: 'x', trim: 0 }, scheme)).replicates!;
+    same(fast, slow);
+  });
+
+  it('cluster mean by cluster sums = mean from counts', () => {
+    const site = daily.map((_, i) => `S${i % 23}`);
+    const r = (statistic: object) => runRequest({ data: { x: daily, site }, statistic, scheme: { name: 'cluster', by: 'site' }, B: 600, seed: 'fast', include: ['replicates'] }).replicates!;
+    same(r({ name: 'mean', column: 'x' }), r({ name: 'trimmed-mean', column: 'x', trim: 0 }));
+  });
+
+  it('cluster difference of means by cluster sums = the statistic on expanded counts', () => {
+    const g = daily.map((_, i) => (i < 140 ? 'up' : 'down'));
+    const site = daily.map((_, i) => `S${Math.floor(i / 10)}`);
+    const request = { data: { x: daily, g, site }, statistic: { name: 'mean-difference', column: 'x', group: 'g', levels: ['up', 'down'] }, scheme: { name: 'cluster', by: 'site' }, B: 50 };
+    const problem = prepare(request);
+    const clusters = strataFromKeys(site);
+    const ctx = { statisticName: 'mean-difference', data: problem.data } as unknown as SchemeContext;
+    const f = clusterSums(ctx, [clusters], clusters.length)!;
+    const stat = STATISTICS.get('mean-difference')!.prepare(problem.data, problem.request.statistic);
+    const random = seedrandom('md');
+    for (let b = 0; b < 20; b++) {
+      const counts = new Int32Array(problem.n);
+      const total = addClusterCounts(clusters, random, counts);
+      const mult = Int32Array.from(clusters, (rows) => counts[rows[0]]);
+      expect(f(mult)).toBeCloseTo(stat.fromCounts(counts, total), 12);
+    }
+  });
+});
+
+describe('scheme details in the response', () => {
+  it('moving-block "auto" reports the rule\'s numbers; circular variant', () => {
+    const r = runRequest({ data: { x: daily }, statistic: { name: 'median', column: 'x' }, scheme: { name: 'moving-block', blockLength: 'auto' }, B: 200 });
+    expect(r.scheme).toMatchObject({ name: 'moving-block', variant: 'circular', blockLengthMethod: 'auto', auto: { column: 'x' } });
+    expect(Number.isInteger(r.scheme.blockLength)).toBe(true);
+    expect(r.provenance.scheme).toMatch(/circular/);
+    // no inner SE for dependent resamples: the studentized interval says why
+    const s = runRequest({ data: { x: daily }, statistic: { name: 'mean', column: 'x' }, scheme: { name: 'stationary', meanBlockLength: 5 }, B: 200, intervals: { methods: ['studentized'] } });
+    expect(s.intervals.studentized!.lower).toBeNull();
+  });
+
+  it('two-group block resampling keeps each group its own series', () => {
+    const g = daily.map((_, i) => (i < 150 ? 'up' : 'down'));
+    const r = runRequest({ data: { x: daily, g }, statistic: { name: 'mean-difference', column: 'x', group: 'g', levels: ['up', 'down'] }, scheme: { name: 'moving-block', blockLength: 149 }, B: 100 });
+    expect(r.se).toBeGreaterThan(0);
+    expect(() => runRequest({ data: { x: daily, g }, statistic: { name: 'mean-difference', column: 'x', group: 'g', levels: ['up', 'down'] }, scheme: { name: 'moving-block', blockLength: 150 }, B: 100 })).toThrow(/smaller group has only 150/);
+  });
+
+  it('cluster: a group with one cluster is refused, naming the level', () => {
+    const data = { x: [1, 2, 3, 4, 5, 6], g: ['a', 'a', 'b', 'b', 'b', 'b'], site: ['s1', 's1', 's2', 's2', 's3', 's3'] };
+    expect(() => runRequest({ data, statistic: { name: 'mean-difference', column: 'x', group: 'g', levels: ['a', 'b'] }, scheme: { name: 'cluster', by: 'site' }, B: 100 })).toThrow(/group "a" has only 1 cluster/);
+  });
+});
