@@ -6,18 +6,36 @@
  */
 
 const pair = new Float64Array(2);
+/** Running count through the position scanTo returned. */
+let reached = 0;
 
-/** Values at ranks r and r+1 of the resample (0-based), written to the returned scratch pair. */
-export function ranksPair(sorted: Float64Array, order: Int32Array, counts: Int32Array, r: number): Float64Array {
+/**
+ * First sorted position p whose running count exceeds r (m − 1 when none does; reached =
+ * the running count through p). Four positions are summed per step and the last group is
+ * then walked one by one: fewer tests in the loop, the same p (counts are whole numbers).
+ */
+function scanTo(order: Int32Array, counts: Int32Array, r: number, m: number): number {
   let cum = 0;
   let p = 0;
-  const m = sorted.length;
+  for (const m4 = m - 3; p < m4; p += 4) {
+    const s = counts[order[p]] + counts[order[p + 1]] + counts[order[p + 2]] + counts[order[p + 3]];
+    if (cum + s > r) break;
+    cum += s;
+  }
   for (; p < m; p++) {
     cum += counts[order[p]];
     if (cum > r) break;
   }
+  reached = cum;
+  return p < m ? p : m - 1;
+}
+
+/** Values at ranks r and r+1 of the resample (0-based), written to the returned scratch pair. */
+export function ranksPair(sorted: Float64Array, order: Int32Array, counts: Int32Array, r: number): Float64Array {
+  const m = sorted.length;
+  let p = scanTo(order, counts, r, m);
   pair[0] = sorted[p];
-  if (cum > r + 1) {
+  if (reached > r + 1) {
     pair[1] = sorted[p];
     return pair;
   }
@@ -30,13 +48,7 @@ export function ranksPair(sorted: Float64Array, order: Int32Array, counts: Int32
 
 /** Value at rank r (0-based) of the resample. */
 export function rankValue(sorted: Float64Array, order: Int32Array, counts: Int32Array, r: number): number {
-  let cum = 0;
-  const m = sorted.length;
-  for (let p = 0; p < m; p++) {
-    cum += counts[order[p]];
-    if (cum > r) return sorted[p];
-  }
-  return sorted[m - 1];
+  return sorted[scanTo(order, counts, r, sorted.length)];
 }
 
 /**
