@@ -2,12 +2,13 @@
  * Command line: `npm run -s compute -- FILE` (FILE a request JSON, `-` for stdin) prints
  * one JSON response on stdout. Bad input prints `{"error":{"code","message","path"}}` on
  * stdout and exits 1 (2 for a usage error, 3 for an internal error). Options:
- * `--threads N` (0 = no workers), `--pretty`, `--progress` (progress lines on stderr).
+ * `--threads N` (worker threads besides this one, which draws too; 0 = this thread only;
+ * default one per core but one), `--pretty`, `--progress` (progress lines on stderr).
  * Bundled to dist/engine/cli.mjs and started by scripts/compute.mjs.
  */
 import { readFileSync } from 'node:fs';
 import { EngineError } from '@/lib/resampling';
-import { compute, prewarmCompute } from './index';
+import { compute, defaultWorkers, looksLarge, prewarmCompute } from './index';
 
 function usage(message: string): never {
   process.stdout.write(`${JSON.stringify({ error: { code: 'bad_request:usage', message, path: '' } })}\n`);
@@ -35,8 +36,6 @@ export async function main(argv: string[]): Promise<void> {
     else usage(`unexpected argument ${a}`);
   }
   if (file === null) usage('give a request file, or - to read the request from standard input');
-  // Large requests go to worker threads: start them now, while the request is read and parsed.
-  if (threads !== 0) prewarmCompute(threads);
 
   let text: string;
   try {
@@ -50,9 +49,13 @@ export async function main(argv: string[]): Promise<void> {
   } catch (e) {
     return finish(JSON.stringify({ error: { code: 'bad_request:json', message: `the request is not valid JSON: ${(e as Error).message}`, path: '' } }), 1);
   }
+  // A large request goes to worker threads: start them now, so that they start up while
+  // this thread validates and prepares the request.
+  if (threads !== 0 && looksLarge(input)) prewarmCompute(threads ?? defaultWorkers(true));
   try {
     const response = await compute(input, {
       threads,
+      callerDraws: true,
       onProgress: progress ? (done, total) => process.stderr.write(`progress ${done}/${total}\n`) : undefined,
     });
     finish(pretty ? JSON.stringify(response, null, 2) : JSON.stringify(response), 0);

@@ -25,6 +25,18 @@ describe('compute() in worker threads', () => {
     expect(JSON.stringify(await compute(big, { threads: 1 }))).toBe(expected);
   }, 120_000);
 
+  it('is bit-identical when the calling thread draws alongside the workers (the CLI default)', async () => {
+    const expected = JSON.stringify(runRequest(big));
+    expect(JSON.stringify(await compute(big, { threads: 1, callerDraws: true }))).toBe(expected);
+    expect(JSON.stringify(await compute(big, { threads: 2, callerDraws: true }))).toBe(expected);
+    // Two jobs at once on one pool: chunks are claimed per job, results stay apart.
+    const other = { ...big, seed: 'other' };
+    const [a, b] = await Promise.all([compute(big, { threads: 2 }), compute(other, { threads: 2 })]);
+    expect(JSON.stringify(a)).toBe(expected);
+    expect(JSON.stringify(b)).toBe(JSON.stringify(runRequest(other)));
+    expect(JSON.stringify(b)).not.toBe(expected);
+  }, 120_000);
+
   it('is bit-identical for a studentized interval with a nested bootstrap inner SE', async () => {
     const req = { data: { x: daily.slice(0, 60) }, statistic: { name: 'trimmed-mean', column: 'x', trim: 0.1 }, B: 1100, seed: 'st', intervals: { methods: ['studentized'], studentized: { se: 'bootstrap', innerB: 25 } } };
     expect(JSON.stringify(await compute(req, { threads: 2 }))).toBe(JSON.stringify(runRequest(req)));

@@ -2,41 +2,62 @@ import 'server-only';
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
 import { EngineError, type EngineRequest } from '@/lib/resampling';
-import type { FromWorker, ToWorker } from './protocol';
+import { CLAIMED, FINISHED, type FromWorker, type JobBuffers, type ToWorker } from './protocol';
+
+export interface Drawn {
+  theta: Float64Array;
+  innerSe: Float64Array | null;
+}
+
+export interface RunOptions {
+  signal?: AbortSignal;
+  onProgress?: (done: number, total: number) => void;
+  /** Draws chunk k on the calling thread, into the job's arrays. */
+  inline?: (k: number, theta: Float64Array, innerSe: Float64Array | null) => void;
+  /**
+   * When the calling thread draws too: 'always' (a command line, whose thread has nothing
+   * else to do: it draws alongside the workers until no chunk is left) or 'while-starting'
+   * (a server: only until the first worker is up, so its event loop is soon free again).
+   */
+  callerDraws?: 'always' | 'while-starting';
+}
 
 interface Job {
   id: number;
   request: EngineRequest;
+  buffers: JobBuffers;
+  control: Int32Array;
+  theta: Float64Array;
+  innerSe: Float64Array | null;
+  chunkSizes: number[];
   total: number;
-  pending: number;
-  results: (FromWorker & { type: 'done' })[];
+  finished: number;
+  replicatesDone: number;
   onProgress?: (done: number, total: number) => void;
-  resolve: (r: (FromWorker & { type: 'done' })[]) => void;
+  resolve: (r: Drawn) => void;
   reject: (e: unknown) => void;
   done: boolean;
-  /** Replicates finished so far (for progress). */
-  replicatesDone: number;
-  chunkSizes: number[];
 }
 
 interface Slot {
   worker: Worker;
   ready: Promise<void>;
   isReady: boolean;
-  busy: { job: number; k: number } | null;
-  seen: Set<number>;
+  /** The job this worker was given and has not yet reported idle for. */
+  job: Job | null;
 }
 
 /**
- * A pool of engine worker threads (one per core by default) sharing one queue of
- * (job, chunk) tasks. Workers take the next chunk as soon as they finish one, so uneven
- * chunks balance themselves; results are placed by chunk index, so the response does not
- * depend on which worker drew what. Idle workers are unref'd (a CLI exits when done);
- * a cancelled job's running workers are terminated and replaced lazily.
+ * A pool of engine worker threads sharing jobs chunk by chunk. Each job's chunks are claimed
+ * through a shared counter (protocol.ts): every thread on the job — the workers, and the
+ * calling thread if it helps — takes the next unclaimed chunk as soon as it finishes one, so
+ * uneven chunks and a busy core balance themselves without a message round trip. Replicates
+ * are written in place into shared arrays by chunk index, so the response does not depend on
+ * which thread drew what. Jobs are served in arrival order. Idle workers are unref'd (a CLI
+ * exits when done); a cancelled job's running workers are terminated and replaced lazily.
  */
 export class EnginePool {
   private slots: Slot[] = [];
-  private queue: { job: Job; k: number }[] = [];
   private jobs = new Map<number, Job>();
   private nextId = 1;
 
@@ -45,31 +66,36 @@ export class EnginePool {
     readonly size: number = Math.max(1, Math.min(availableParallelism(), 8)),
   ) {}
 
-  /** Draws the given chunks of a request; resolves with one result per chunk, in chunk order. */
-  run(
-    request: EngineRequest,
-    chunkSizes: number[],
-    opts: { signal?: AbortSignal; onProgress?: (done: number, total: number) => void; inline?: (k: number) => { theta: Float64Array; innerSe: Float64Array | null } } = {},
-  ): Promise<(FromWorker & { type: 'done' })[]> {
+  /** Draws every chunk of a request; resolves with the replicates (length B, in order). */
+  run(request: EngineRequest, chunkSizes: number[], withInnerSe: boolean, opts: RunOptions = {}): Promise<Drawn> {
     return new Promise((resolve, reject) => {
       const id = this.nextId++;
+      const B = chunkSizes.reduce((a, b) => a + b, 0);
+      const buffers: JobBuffers = {
+        control: new SharedArrayBuffer(2 * Int32Array.BYTES_PER_ELEMENT),
+        theta: new SharedArrayBuffer(B * Float64Array.BYTES_PER_ELEMENT),
+        innerSe: withInnerSe ? new SharedArrayBuffer(B * Float64Array.BYTES_PER_ELEMENT) : null,
+        chunks: chunkSizes.length,
+      };
       const job: Job = {
         id,
         request,
-        total: request.B,
-        pending: chunkSizes.length,
-        results: new Array(chunkSizes.length),
+        buffers,
+        control: new Int32Array(buffers.control),
+        theta: new Float64Array(buffers.theta),
+        innerSe: buffers.innerSe ? new Float64Array(buffers.innerSe) : null,
+        chunkSizes,
+        total: B,
+        finished: 0,
+        replicatesDone: 0,
         onProgress: opts.onProgress,
         resolve,
         reject,
         done: false,
-        replicatesDone: 0,
-        chunkSizes,
       };
-      this.jobs.set(id, job);
       const signal = opts.signal;
       if (signal) {
-        if (signal.aborted) return this.cancel(job, signal.reason);
+        if (signal.aborted) return reject(signal.reason ?? new DOMException('The computation was aborted.', 'AbortError'));
         const onAbort = () => this.cancel(job, signal.reason);
         signal.addEventListener('abort', onAbort, { once: true });
         const finish = () => signal.removeEventListener('abort', onAbort);
@@ -82,41 +108,44 @@ export class EnginePool {
           reject(e);
         };
       }
-      for (let k = 0; k < chunkSizes.length; k++) this.queue.push({ job, k });
+      this.jobs.set(id, job);
+      if (chunkSizes.length === 0) return this.complete(job);
       this.ensureSlots();
       this.dispatch();
-      if (opts.inline) void this.helpWhileStarting(job, opts.inline);
+      if (opts.inline) void this.drawOnCaller(job, opts.inline, opts.callerDraws ?? 'while-starting');
     });
   }
 
   /**
-   * While no worker has started yet (a fresh process), the calling thread draws chunks of
-   * the job itself, yielding between chunks so worker messages are handled; it stops as soon
-   * as a worker is ready, so the cores are not oversubscribed.
+   * The calling thread claims and draws chunks of the job itself, yielding between chunks so
+   * worker messages are handled. In 'while-starting' mode it stops as soon as a worker is up,
+   * so a server's cores are not oversubscribed and its event loop is free again.
    */
-  private async helpWhileStarting(job: Job, inline: (k: number) => { theta: Float64Array; innerSe: Float64Array | null }): Promise<void> {
-    while (!job.done && !this.slots.some((s) => s.isReady)) {
-      const at = this.queue.findIndex((t) => t.job === job);
-      if (at < 0) return;
-      const [task] = this.queue.splice(at, 1);
+  private async drawOnCaller(job: Job, inline: NonNullable<RunOptions['inline']>, mode: 'always' | 'while-starting'): Promise<void> {
+    while (!job.done) {
+      if (mode === 'while-starting' && this.slots.some((s) => s.isReady)) return;
+      const k = Atomics.add(job.control, CLAIMED, 1);
+      if (k >= job.buffers.chunks) return;
       try {
-        const r = inline(task.k);
-        this.accept(job, { type: 'done', job: job.id, k: task.k, theta: r.theta, innerSe: r.innerSe });
+        inline(k, job.theta, job.innerSe);
       } catch (e) {
         this.fail(job, e);
         return;
       }
+      Atomics.add(job.control, FINISHED, 1);
+      this.accept(job, k);
       await new Promise<void>((resolve) => setImmediate(resolve));
     }
   }
 
-  private accept(job: Job, msg: FromWorker & { type: 'done' }): void {
+  private accept(job: Job, k: number): void {
     if (job.done) return;
-    job.results[msg.k] = msg;
-    job.pending--;
-    job.replicatesDone += job.chunkSizes[msg.k];
+    job.finished++;
+    job.replicatesDone += job.chunkSizes[k];
     job.onProgress?.(job.replicatesDone, job.total);
-    if (job.pending === 0) this.complete(job);
+    // The atomic read orders this thread's reads of the shared arrays after every worker's
+    // writes of the chunks it counted.
+    if (job.finished === job.buffers.chunks && Atomics.load(job.control, FINISHED) === job.buffers.chunks) this.complete(job);
   }
 
   /** Starts the workers now (they load the engine while the caller reads its input). */
@@ -138,15 +167,13 @@ export class EnginePool {
   private spawn(): Slot {
     const worker = new Worker(this.file);
     let markReady!: () => void;
-    const slot: Slot = { worker, ready: new Promise<void>((r) => (markReady = r)), isReady: false, busy: null, seen: new Set() };
+    const slot: Slot = { worker, ready: new Promise<void>((r) => (markReady = r)), isReady: false, job: null };
     worker.unref();
     worker.on('message', (msg: FromWorker) => {
       if (msg.type === 'ready') {
         slot.isReady = true;
         markReady();
-        return;
-      }
-      this.onResult(slot, msg);
+      } else this.onMessage(slot, msg);
     });
     worker.on('error', (err) => this.onCrash(slot, err));
     worker.on('exit', (code) => {
@@ -155,44 +182,46 @@ export class EnginePool {
     return slot;
   }
 
+  /** Gives every idle worker the oldest job that still has unclaimed chunks. */
   private dispatch(): void {
     for (const slot of this.slots) {
-      if (slot.busy || !this.queue.length) continue;
-      const task = this.queue.shift()!;
-      slot.busy = { job: task.job.id, k: task.k };
+      if (slot.job) continue;
+      const job = [...this.jobs.values()].find((j) => !j.done && Atomics.load(j.control, CLAIMED) < j.buffers.chunks);
+      if (!job) return;
+      slot.job = job;
       slot.worker.ref();
-      const msg: ToWorker = { type: 'run', job: task.job.id, k: task.k, request: slot.seen.has(task.job.id) ? undefined : task.job.request };
-      slot.seen.add(task.job.id);
+      const msg: ToWorker = { type: 'run', job: job.id, request: job.request, buffers: job.buffers };
       void slot.ready.then(() => slot.worker.postMessage(msg));
     }
   }
 
-  private onResult(slot: Slot, msg: FromWorker): void {
+  private onMessage(slot: Slot, msg: FromWorker): void {
     if (msg.type === 'ready') return;
-    slot.busy = null;
-    slot.worker.unref();
     const job = this.jobs.get(msg.job);
-    if (job && !job.done) {
-      if (msg.type === 'error') {
-        const e = msg.error.name === 'EngineError' ? new EngineError(msg.error.code ?? 'internal:engine', msg.error.message, msg.error.path ?? '') : new Error(msg.error.message);
-        this.fail(job, e);
-      } else this.accept(job, msg);
+    if (msg.type === 'idle') {
+      if (slot.job?.id === msg.job) slot.job = null;
+      slot.worker.unref();
+      this.dispatch();
+      return;
     }
-    this.dispatch();
+    if (!job || job.done) return;
+    if (msg.type === 'error') {
+      const e = msg.error.name === 'EngineError' ? new EngineError(msg.error.code ?? 'internal:engine', msg.error.message, msg.error.path ?? '') : new Error(msg.error.message);
+      this.fail(job, e);
+    } else this.accept(job, msg.k);
   }
 
   private complete(job: Job): void {
     job.done = true;
     this.jobs.delete(job.id);
-    this.forget(job.id);
-    job.resolve(job.results);
+    job.resolve({ theta: job.theta, innerSe: job.innerSe });
   }
 
   private fail(job: Job, e: unknown): void {
     job.done = true;
+    // Nobody claims another chunk of it; workers on it finish their current chunk.
+    Atomics.store(job.control, CLAIMED, job.buffers.chunks);
     this.jobs.delete(job.id);
-    this.queue = this.queue.filter((t) => t.job !== job);
-    this.forget(job.id);
     job.reject(e);
   }
 
@@ -200,33 +229,24 @@ export class EnginePool {
     if (job.done) return;
     // Workers in the middle of this job's chunk cannot be interrupted: replace them.
     for (const slot of [...this.slots]) {
-      if (slot.busy?.job === job.id) {
+      if (slot.job === job && slot.isReady) {
         this.slots = this.slots.filter((s) => s !== slot);
         void slot.worker.terminate();
       }
     }
     this.fail(job, reason ?? new DOMException('The computation was aborted.', 'AbortError'));
-    if (this.queue.length) {
+    if (this.jobs.size) {
       this.ensureSlots();
       this.dispatch();
-    }
-  }
-
-  private forget(id: number): void {
-    for (const slot of this.slots) {
-      if (slot.seen.delete(id)) void slot.ready.then(() => slot.worker.postMessage({ type: 'forget', job: id } satisfies ToWorker));
     }
   }
 
   private onCrash(slot: Slot, err: unknown): void {
     if (!this.slots.includes(slot)) return;
     this.slots = this.slots.filter((s) => s !== slot);
-    const busy = slot.busy;
-    if (busy) {
-      const job = this.jobs.get(busy.job);
-      if (job) this.fail(job, err instanceof Error ? err : new Error(String(err)));
-    }
-    if (this.queue.length) {
+    // A chunk it had claimed will never be written: its job cannot finish.
+    if (slot.job && !slot.job.done) this.fail(slot.job, err instanceof Error ? err : new Error(String(err)));
+    if (this.jobs.size) {
       this.ensureSlots();
       this.dispatch();
     }

@@ -1,37 +1,38 @@
 /**
- * Engine worker thread: prepares each job's Problem once (the same deterministic
- * preparation as the main thread) and draws the replicate chunks it is sent, posting the
- * typed arrays back without copying. Bundled to dist/engine/worker.mjs (build-engine.mjs).
+ * Engine worker thread: for each job it is given, prepares the job's Problem (the same
+ * deterministic preparation as the main thread), then claims chunks from the job's shared
+ * counter and draws them straight into the job's shared replicate arrays until none is left
+ * (protocol.ts). Bundled to dist/engine/worker.mjs (build-engine.mjs).
  */
 import { parentPort } from 'node:worker_threads';
 import { prepareProblem } from '@/lib/resampling/engine/prepare';
-import type { Problem } from '@/lib/resampling/engine/problem';
-import { runChunk } from '@/lib/resampling/replicates/run-chunk';
-import type { FromWorker, ToWorker } from './protocol';
+import { runChunkInto } from '@/lib/resampling/replicates/run-chunk';
+import { CLAIMED, FINISHED, type FromWorker, type ToWorker } from './protocol';
 
-const problems = new Map<number, Problem>();
 const port = parentPort!;
 
 port.on('message', (msg: ToWorker) => {
-  if (msg.type === 'forget') {
-    problems.delete(msg.job);
-    return;
-  }
+  const { control: sab, theta: thetaSab, innerSe: innerSab, chunks } = msg.buffers;
+  const control = new Int32Array(sab);
+  let k = -1;
   try {
-    let problem = problems.get(msg.job);
-    if (!problem) {
-      if (!msg.request) throw new Error(`job ${msg.job} was not sent to this worker`);
-      problem = prepareProblem(msg.request);
-      problems.set(msg.job, problem);
+    // The other threads may have drawn every chunk while this one was starting.
+    if (Atomics.load(control, CLAIMED) < chunks) {
+      const problem = prepareProblem(msg.request);
+      const theta = new Float64Array(thetaSab);
+      const innerSe = innerSab ? new Float64Array(innerSab) : null;
+      while ((k = Atomics.add(control, CLAIMED, 1)) < chunks) {
+        runChunkInto(problem, k, theta, innerSe);
+        Atomics.add(control, FINISHED, 1);
+        port.postMessage({ type: 'chunk', job: msg.job, k } satisfies FromWorker);
+      }
     }
-    const r = runChunk(problem, msg.k);
-    const out: FromWorker = { type: 'done', job: msg.job, k: msg.k, theta: r.theta, innerSe: r.innerSe };
-    port.postMessage(out, (r.innerSe ? [r.theta.buffer, r.innerSe.buffer] : [r.theta.buffer]) as ArrayBuffer[]);
   } catch (e) {
     const err = e as { name?: string; code?: string; message?: string; path?: string };
-    const out: FromWorker = { type: 'error', job: msg.job, k: msg.k, error: { name: err.name ?? 'Error', code: err.code, message: err.message ?? String(e), path: err.path } };
+    const out: FromWorker = { type: 'error', job: msg.job, k, error: { name: err.name ?? 'Error', code: err.code, message: err.message ?? String(e), path: err.path } };
     port.postMessage(out);
   }
+  port.postMessage({ type: 'idle', job: msg.job } satisfies FromWorker);
 });
 
 port.postMessage({ type: 'ready' } satisfies FromWorker);

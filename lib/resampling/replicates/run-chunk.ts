@@ -21,17 +21,34 @@ export function needsInnerSe(problem: Problem): boolean {
  * (nested bootstrap) or the jackknife of the resample is taken. Pure and deterministic.
  */
 export function runChunk(problem: Problem, k: number): ChunkResult {
+  const [start, end] = chunkRange(problem.request.B, k);
+  const theta = new Float64Array(end - start);
+  const innerSe = needsInnerSe(problem) ? new Float64Array(end - start) : null;
+  drawChunk(problem, k, theta, innerSe, 0);
+  return { theta, innerSe };
+}
+
+/**
+ * The same draws as runChunk, written in place: replicate b of chunk k (global index
+ * start + b) goes to theta[start + b] (and innerSe), for arrays of length B. Worker threads
+ * write straight into one shared array this way, so replicates are never copied between
+ * threads.
+ */
+export function runChunkInto(problem: Problem, k: number, theta: Float64Array, innerSe: Float64Array | null): void {
+  drawChunk(problem, k, theta, innerSe, chunkRange(problem.request.B, k)[0]);
+}
+
+function drawChunk(problem: Problem, k: number, theta: Float64Array, innerSe: Float64Array | null, offset: number): void {
   const { B, seed } = problem.request;
   const [start, end] = chunkRange(B, k);
   const count = end - start;
   const rng = createRng(seed, `chunk:${k}`);
-  const theta = new Float64Array(count);
   const scheme = problem.scheme;
   if (!needsInnerSe(problem)) {
-    for (let b = 0; b < count; b++) theta[b] = scheme.replicate(rng);
-    return { theta, innerSe: null };
+    for (let b = 0; b < count; b++) theta[offset + b] = scheme.replicate(rng);
+    return;
   }
-  const innerSe = new Float64Array(count);
+  if (!innerSe) throw new Error('runChunkInto: the studentized interval needs an innerSe array');
   const counting = scheme.counting!;
   const stat = problem.statistic;
   const n = problem.n;
@@ -40,11 +57,10 @@ export function runChunk(problem: Problem, k: number): ChunkResult {
   const pool = new Int32Array(n);
   const inner = new Int32Array(n);
   for (let b = 0; b < count; b++) {
-    theta[b] = scheme.replicate(rng);
-    innerSe[b] =
+    theta[offset + b] = scheme.replicate(rng);
+    innerSe[offset + b] =
       opts.se === 'bootstrap'
         ? bootstrapSeOfResample(stat, counting.strata, counting.counts, n, opts.innerB, rng, pool, inner)
         : jackknifeSeOfResample(stat, counting.strata, counting.counts, n, scratch);
   }
-  return { theta, innerSe };
 }
