@@ -33,9 +33,15 @@ export interface UploadState {
  * in page memory. Asks for the NDJSON progress stream and reports both halves: the bytes
  * going up (0–85 % of the bar) and the server's checking, hashing and storing (85–100 %).
  */
-export function sendUpload(url: string, body: Blob, onState: (s: UploadState) => void): Promise<UploadDone | UploadFailure> {
+export function sendUpload(url: string, body: Blob, onState: (s: UploadState) => void, signal?: AbortSignal): Promise<UploadDone | UploadFailure> {
   return new Promise((resolve) => {
     const xhr = new XMLHttpRequest();
+    // Cancel aborts the request: the server sees the connection close, stops reading and
+    // rolls back, so nothing is stored.
+    const cancelled = (): UploadFailure => ({ type: 'error', status: 0, error: { code: 'cancelled:upload', message: 'Upload cancelled. Nothing was stored.', path: '' } });
+    if (signal?.aborted) return resolve(cancelled());
+    signal?.addEventListener('abort', () => xhr.abort(), { once: true });
+    xhr.onabort = () => resolve(cancelled());
     xhr.open('POST', url);
     xhr.setRequestHeader('content-type', body.type && !body.type.includes('json') ? body.type : 'text/csv');
     xhr.setRequestHeader('accept', 'application/x-ndjson');

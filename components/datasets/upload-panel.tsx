@@ -1,7 +1,7 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
-import { useEffect, useId, useState } from 'react';
+import { useEffect, useId, useRef, useState } from 'react';
 import { MAX_UPLOAD_BYTES } from '@/lib/datasets/limits';
 import { delimiterName, type ReadOptions } from '@/lib/datasets/options';
 import { bytes } from './format';
@@ -30,6 +30,8 @@ export function UploadPanel({ labId, datasetId, defaultOpen = false }: { labId: 
   const [state, setState] = useState<UploadState>({ stage: 'idle', fraction: 0, label: '' });
   const [error, setError] = useState<string | null>(null);
   const busy = state.stage === 'uploading' || state.stage === 'server';
+  const upload = useRef<AbortController | null>(null);
+  useEffect(() => () => upload.current?.abort(), []);
 
   useEffect(() => {
     if (!source) return setPreview(null);
@@ -64,9 +66,11 @@ export function UploadPanel({ labId, datasetId, defaultOpen = false }: { labId: 
     if (source.kind === 'file') q.set('fileName', source.file.name.slice(0, 255));
     const url = datasetId === undefined ? `/api/labs/${labId}/datasets?${q}` : `/api/labs/${labId}/datasets/${datasetId}/versions?${q}`;
     const body = source.kind === 'file' ? source.file : new Blob([source.text], { type: 'text/csv' });
-    const result = await sendUpload(url, body, setState);
+    upload.current = new AbortController();
+    const result = await sendUpload(url, body, setState, upload.current.signal);
+    upload.current = null;
     if (result.type === 'error') {
-      setState({ stage: 'failed', fraction: 0, label: '' });
+      setState({ stage: result.error.code === 'cancelled:upload' ? 'idle' : 'failed', fraction: 0, label: '' });
       setError(result.error.message);
       return;
     }
@@ -179,9 +183,15 @@ export function UploadPanel({ labId, datasetId, defaultOpen = false }: { labId: 
         <button type="submit" disabled={busy || !source} className="rounded-md bg-ink px-4 py-2 text-sm font-medium text-paper hover:bg-ink-soft disabled:opacity-50">
           {busy ? 'Uploading…' : datasetId === undefined ? 'Create dataset' : 'Store as new version'}
         </button>
-        <button type="button" disabled={busy} onClick={() => setOpen(false)} className="rounded-md px-3 py-2 text-sm text-ink-soft hover:bg-paper-deep">
-          Cancel
-        </button>
+        {busy ? (
+          <button type="button" onClick={() => upload.current?.abort()} className="rounded-md border border-oxide/50 px-3 py-2 text-sm text-oxide hover:bg-oxide-wash">
+            Cancel upload
+          </button>
+        ) : (
+          <button type="button" onClick={() => setOpen(false)} className="rounded-md px-3 py-2 text-sm text-ink-soft hover:bg-paper-deep">
+            Cancel
+          </button>
+        )}
       </div>
     </form>
   );

@@ -64,28 +64,42 @@ function errorBody(e: unknown): { status: number; body: { error: { code: string;
  * `{"type":"done","status":201,...}` or `{"type":"error","status":422,"error":{...}}` — so it
  * can show a progress bar for the parsing and storing that follow the upload itself.
  */
-export async function uploadResponse<P, T extends object>(request: Request, run: (onProgress?: (p: P) => void) => Promise<T>): Promise<Response> {
+export async function uploadResponse<P, T extends object>(request: Request, run: (onProgress: ((p: P) => void) | undefined, signal: AbortSignal) => Promise<T>): Promise<Response> {
+  // Aborted when the uploader goes away (Cancel aborts the request; Next aborts request.signal
+  // when the connection closes) or stops reading the progress stream: the import then stops,
+  // rolls back its transaction if it had begun one, and stores nothing.
+  const abort = new AbortController();
+  const gone = () => abort.abort(new AppError('bad_request:dataset', 'The upload was cancelled. Nothing was stored.', 'file'));
+  if (request.signal?.aborted) gone();
+  else request.signal?.addEventListener('abort', gone, { once: true });
   if (!wantsProgress(request)) {
     try {
-      return Response.json(await run(), { status: 201 });
+      return Response.json(await run(undefined, abort.signal), { status: 201 });
     } catch (e) {
       await drain(request);
       throw e;
     }
   }
   const encoder = new TextEncoder();
+  let open = true;
   const stream = new ReadableStream<Uint8Array>({
     async start(controller) {
-      const send = (line: object) => controller.enqueue(encoder.encode(`${JSON.stringify(line)}\n`));
+      const send = (line: object) => {
+        if (open) controller.enqueue(encoder.encode(`${JSON.stringify(line)}\n`));
+      };
       try {
-        const result = await run((p) => send({ type: 'progress', ...p }));
+        const result = await run((p) => send({ type: 'progress', ...p }), abort.signal);
         send({ type: 'done', status: 201, ...result });
       } catch (e) {
         await drain(request);
         const { status, body } = errorBody(e);
         send({ type: 'error', status, ...body });
       }
-      controller.close();
+      if (open) controller.close();
+    },
+    cancel() {
+      open = false;
+      gone();
     },
   });
   return new Response(stream, { status: 200, headers: { 'content-type': 'application/x-ndjson; charset=utf-8', 'cache-control': 'no-store', 'x-accel-buffering': 'no' } });

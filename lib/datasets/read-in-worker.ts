@@ -49,6 +49,27 @@ async function slot(signal?: AbortSignal): Promise<() => void> {
   };
 }
 
+/**
+ * The source's chunks until `signal` aborts: a read waiting on a stalled connection is not
+ * waited for once the uploader has cancelled.
+ */
+async function* untilAborted(source: AsyncIterable<Uint8Array>, signal?: AbortSignal): AsyncGenerator<Uint8Array> {
+  if (!signal) return yield* source;
+  const it = source[Symbol.asyncIterator]();
+  const aborted = new Promise<never>((_, reject) => signal.addEventListener('abort', () => reject(cancelled()), { once: true }));
+  aborted.catch(() => {});
+  try {
+    for (;;) {
+      const next = await Promise.race([it.next(), aborted]);
+      if (next.done) return;
+      yield next.value;
+    }
+  } finally {
+    // Not awaited: a pending read ends when the connection closes.
+    void it.return?.()?.catch?.(() => {});
+  }
+}
+
 function cancelled() {
   return new AppError('bad_request:dataset', 'The upload was cancelled. Nothing was stored.', 'file');
 }
@@ -115,7 +136,7 @@ export async function readCsvInWorker(
   try {
     send({ type: 'start', options, maxBytes: opts.maxBytes });
     try {
-      for await (const chunk of source) {
+      for await (const chunk of untilAborted(source, signal)) {
         if (failed) break;
         // A copy the worker may own: request chunks can be views into buffers Node reuses
         // (new Uint8Array(view) copies; Buffer#slice would not).

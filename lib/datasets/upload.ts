@@ -11,6 +11,8 @@ export interface UploadRequest {
   source: { kind: 'upload' | 'paste'; fileName?: string };
   body: AsyncIterable<Uint8Array> | string;
   declaredBytes?: number;
+  /** Aborted when the uploader cancels: nothing is stored. */
+  signal?: AbortSignal;
 }
 
 /**

@@ -32,15 +32,15 @@ export const POST = route<Ctx>(async (request, { params }) => {
   if ((request.headers.get('content-type') ?? '').includes('application/json')) {
     const input = await readJson(request, pasteBody, 'dataset');
     await authorize(user.id, labId, 'dataset:write');
-    return uploadResponse(request, (onProgress) =>
-      uploadDataset({ labId, userId: user.id, name: input.name, options: readOptionsOf(input), source: { kind: 'paste' }, body: input.csv }, onProgress),
+    return uploadResponse(request, (onProgress, signal) =>
+      uploadDataset({ labId, userId: user.id, name: input.name, options: readOptionsOf(input), source: { kind: 'paste' }, body: input.csv, signal }, onProgress),
     );
   }
   const q = parseWith(uploadQuery, Object.fromEntries(new URL(request.url).searchParams), 'dataset');
   await authorize(user.id, labId, 'dataset:write');
-  return uploadResponse(request, (onProgress) =>
+  return uploadResponse(request, (onProgress, signal) =>
     uploadDataset(
-      { labId, userId: user.id, name: q.name, options: readOptionsOf(q), source: { kind: q.source, fileName: q.fileName }, body: requestBytes(request), declaredBytes: declaredLength(request) },
+      { labId, userId: user.id, name: q.name, options: readOptionsOf(q), source: { kind: q.source, fileName: q.fileName }, body: requestBytes(request), declaredBytes: declaredLength(request), signal },
       onProgress,
     ),
   );

@@ -24,15 +24,15 @@ export const POST = route<Ctx>(async (request, { params }) => {
     const input = await readJson(request, versionBody, 'dataset');
     await authorize(user.id, labId, 'dataset:write');
     if ('columns' in input) return Response.json(await saveEditedTable(labId, datasetId, input.columns, input.rows, user.id), { status: 201 });
-    return uploadResponse(request, (onProgress) =>
-      uploadDataset({ labId, userId: user.id, datasetId, options: readOptionsOf(input), source: { kind: 'paste' }, body: input.csv }, onProgress),
+    return uploadResponse(request, (onProgress, signal) =>
+      uploadDataset({ labId, userId: user.id, datasetId, options: readOptionsOf(input), source: { kind: 'paste' }, body: input.csv, signal }, onProgress),
     );
   }
   const q = parseWith(uploadQuery, Object.fromEntries(new URL(request.url).searchParams), 'dataset');
   await authorize(user.id, labId, 'dataset:write');
-  return uploadResponse(request, (onProgress) =>
+  return uploadResponse(request, (onProgress, signal) =>
     uploadDataset(
-      { labId, userId: user.id, datasetId, options: readOptionsOf(q), source: { kind: q.source, fileName: q.fileName }, body: requestBytes(request), declaredBytes: declaredLength(request) },
+      { labId, userId: user.id, datasetId, options: readOptionsOf(q), source: { kind: q.source, fileName: q.fileName }, body: requestBytes(request), declaredBytes: declaredLength(request), signal },
       onProgress,
     ),
   );
