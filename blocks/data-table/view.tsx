@@ -8,6 +8,7 @@ import { BlockFrame } from '@/components/editor/block-frame';
 import { SelectField } from '@/components/editor/fields';
 import { useMemoContext } from '@/components/editor/memo-context';
 import { useLatestVersion } from '@/components/editor/results-store';
+import { VersionPicker } from '@/components/editor/version-picker';
 import type { DataTableAttrs } from './schema';
 
 export interface TablePage {
@@ -83,7 +84,14 @@ export function DataTableView(props: NodeViewProps) {
   const canEdit = editable && !!page?.editable;
 
   return (
-    <BlockFrame type="data-table" label="Data table" blockId={blockId} selected={props.selected} reason={ref ? null : 'Choose a dataset.'}>
+    <BlockFrame
+      type="data-table"
+      label="Data table"
+      blockId={blockId}
+      selected={props.selected}
+      reason={ref ? null : 'Choose a dataset.'}
+      header={<VersionPicker value={ref} onChange={(dataset) => props.updateAttributes({ dataset })} disabled={!editable} />}
+    >
       <div className="flex flex-wrap items-end gap-4">
         <SelectField
           className="min-w-56"

@@ -7,6 +7,7 @@ import { CheckField, parseNumber, SelectField, TextField } from '@/components/ed
 import { useMemoContext, type PickerDataset } from '@/components/editor/memo-context';
 import { Cautions, ResultTable } from '@/components/editor/results-parts';
 import { useBlockRun } from '@/components/editor/use-block-run';
+import { VersionPicker } from '@/components/editor/version-picker';
 import { VegaChart } from '@/components/charts/vega-chart';
 import { formatNumber } from '../live-value/format';
 import type { EngineOutput } from '../shared/output';
@@ -28,7 +29,9 @@ export function EstimateView(props: NodeViewProps) {
   const out = state.shown?.result as EngineOutput | undefined;
 
   return (
-    <BlockFrame type="estimate" label="Estimate" blockId={blockId} selected={props.selected} state={state} reason={rs.ok ? null : rs.reason} exportHref={blockId && out ? `/api/labs/${ctx.labId}/memos/${ctx.memoId}/blocks/${blockId}/svg` : null}>
+    <BlockFrame type="estimate" label="Estimate" blockId={blockId} selected={props.selected} state={state} reason={rs.ok ? null : rs.reason} exportHref={blockId && out ? `/api/labs/${ctx.labId}/memos/${ctx.memoId}/blocks/${blockId}/svg` : null}
+      header={<VersionPicker value={attrs.dataset} onChange={(dataset) => set({ dataset })} disabled={!editable} />}
+    >
       <EstimateSettingsForm attrs={attrs} set={set} datasets={ctx.datasets} dataset={dataset} disabled={!editable} />
       {!rs.ok && <p className="mt-3 rounded bg-paper-deep px-3 py-2 text-sm text-ink-soft" role="status">{rs.reason}</p>}
       {out && (

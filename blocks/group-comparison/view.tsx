@@ -8,6 +8,7 @@ import { parseNumber, SelectField, TextField } from '@/components/editor/fields'
 import { useMemoContext } from '@/components/editor/memo-context';
 import { Cautions, ResultTable } from '@/components/editor/results-parts';
 import { useBlockRun } from '@/components/editor/use-block-run';
+import { VersionPicker } from '@/components/editor/version-picker';
 import { INTERVAL_LABEL, INTERVAL_METHODS } from '../shared/settings';
 import { groupComparisonChart } from './chart';
 import { groupComparison } from './index';
@@ -30,7 +31,9 @@ export function GroupComparisonView(props: NodeViewProps) {
   const disabled = !editable;
   const spec = useMemo(() => (out ? groupComparisonChart(out, { statistic: attrs.statistic, valueLabel: attrs.value }) : null), [out, attrs.statistic, attrs.value]);
   return (
-    <BlockFrame type="group-comparison" label="Group comparison" blockId={blockId} selected={props.selected} state={state} reason={rs.ok ? null : rs.reason} exportHref={blockId && out ? `/api/labs/${ctx.labId}/memos/${ctx.memoId}/blocks/${blockId}/svg` : null}>
+    <BlockFrame type="group-comparison" label="Group comparison" blockId={blockId} selected={props.selected} state={state} reason={rs.ok ? null : rs.reason} exportHref={blockId && out ? `/api/labs/${ctx.labId}/memos/${ctx.memoId}/blocks/${blockId}/svg` : null}
+      header={<VersionPicker value={attrs.dataset} onChange={(dataset) => set({ dataset })} disabled={disabled} />}
+    >
       <details open={editable}>
         <summary className="cursor-pointer text-sm text-river select-none">Settings</summary>
         <div className="mt-2 grid grid-cols-2 gap-3 md:grid-cols-4">

@@ -52,6 +52,8 @@ export function BlockFrame(props: {
   state?: BlockRunState;
   reason?: string | null;
   exportHref?: string | null;
+  /** Controls for the header, such as the dataset version picker. */
+  header?: React.ReactNode;
   children: React.ReactNode;
 }) {
   const { state } = props;
@@ -77,11 +79,14 @@ export function BlockFrame(props: {
             {STATE_LABEL[badge]}
           </span>
         )}
-        {props.exportHref && (
-          <a href={props.exportHref} className="ml-auto text-xs text-river underline-offset-2 hover:underline" download>
-            Download SVG
-          </a>
-        )}
+        <span className="ml-auto flex items-center gap-4">
+          {props.header}
+          {props.exportHref && (
+            <a href={props.exportHref} className="text-xs text-river underline-offset-2 hover:underline" download>
+              Download SVG
+            </a>
+          )}
+        </span>
       </header>
       {computing && (
         <div className="flex items-center gap-3 border-b border-paper-edge bg-amber-wash/40 px-4 py-2 text-sm">

@@ -117,6 +117,20 @@ describe('an Author builds a memo from an uploaded CSV', () => {
     await expect.poll(() => memo.block('resample-histogram').innerText(), { timeout: 30_000 }).toContain(`θ̂ = ${meanAfter}`);
     await memo.saved();
     await screenshot(page, 'memo-from-upload-cell-edited');
+
+    // Pinning: the Estimate pinned to v1 reads the upload as it was (the earlier mean, from the
+    // stored result of the same settings), and its histogram follows; Latest reads v2 again.
+    const picker = est.getByLabel('Dataset version');
+    const v1 = await picker.locator('option', { hasText: /^Pin v1 / }).getAttribute('value');
+    await picker.selectOption(v1!);
+    expect(await memo.liveValueChangedFrom(meanAfter)).toBe(meanShown);
+    await expect.poll(() => est.innerText(), { timeout: 30_000 }).toContain(`${name} v1 ·`);
+    await expect.poll(() => memo.block('resample-histogram').innerText(), { timeout: 30_000 }).toContain(`θ̂ = ${meanShown}`);
+    expect(await est.locator('[data-version-pin]').getAttribute('data-version-pin')).toBe('pinned');
+    await screenshot(page, 'memo-from-upload-pinned');
+    await picker.selectOption('latest');
+    expect(await memo.liveValueChangedFrom(meanShown)).toBe(meanAfter);
+    await memo.saved();
     await context.close();
   });
 });
