@@ -1,7 +1,6 @@
 import * as z from 'zod';
 import { EngineError } from '../errors';
 import { columnName } from '../statistics/fields';
-import { addClusterCounts, addClusterMultiplicities } from '../structured/cluster-counts';
 import { strataFromKeys } from './counting';
 import { defineScheme, type SchemeContext } from './types';
 
@@ -47,32 +46,48 @@ export const cluster = defineScheme({
     }
     const counts = new Int32Array(ctx.n);
     const sizes = clusters.map((c) => c.length);
-    // First stage only: every row of cluster g gets the cluster's multiplicity, so the row
-    // counts are one gather pass over a G-entry table (same draws as addClusterCounts).
+    // Clusters are numbered across the sets (set j's clusters from setOffset[j]); every row
+    // of cluster g gets the cluster's multiplicity, so under the first stage alone the row
+    // counts are one gather pass over a G-entry table.
     const clusterOf = new Int32Array(ctx.n);
     const setOffset: number[] = [];
+    const setUnits: Int32Array[] = [];
     let offset = 0;
     for (const set of sets) {
       setOffset.push(offset);
+      setUnits.push(Int32Array.from(set, (_, k) => offset + k));
       set.forEach((rows, k) => rows.forEach((r) => (clusterOf[r] = offset + k)));
       offset += set.length;
     }
+    const sizeOf = Int32Array.from(sets.flat(), (rows) => rows.length);
     const multiplicity = new Int32Array(offset);
-    const sums = s.secondStage ? null : clusterSums(ctx, sets, offset);
+    const drawn = new Int32Array(Math.max(...sets.map((set) => set.length)));
+    const fast = s.secondStage ? null : (clusterSums(ctx, sets, offset) ?? clusterMedian(ctx, clusterOf));
     return {
       description: `cluster bootstrap, the ${clusters.length} clusters of ${s.by} resampled whole${s.secondStage ? ', then rows resampled within each drawn cluster' : ''}${withinGroups ? ', within each group' : ''}`,
       plainResampling: false,
       details: { by: s.by, clusters: clusters.length, secondStage: s.secondStage, withinGroups, smallestCluster: Math.min(...sizes), largestCluster: Math.max(...sizes) },
       replicate(rng) {
-        const random = () => rng.double();
+        // Draws: G uniform cluster indices per set by the engine's unbiased bulk draws
+        // (Rng.addCounts / fillIndices, Lemire's method); with a second stage, m row indices
+        // within each drawn cluster, in draw order.
         let total = 0;
         if (s.secondStage) {
           counts.fill(0);
-          for (const set of sets) total += addClusterCounts(set, random, counts, true);
+          for (const set of sets) {
+            const G = set.length;
+            rng.fillIndices(drawn, 0, G, G);
+            for (let j = 0; j < G; j++) {
+              const rows = set[drawn[j]];
+              rng.addCounts(counts, rows.length, rows.length, rows);
+              total += rows.length;
+            }
+          }
         } else {
           multiplicity.fill(0);
-          sets.forEach((set, j) => (total += addClusterMultiplicities(set, random, multiplicity, setOffset[j])));
-          if (sums) return sums(multiplicity);
+          for (let j = 0; j < sets.length; j++) rng.addCounts(multiplicity, sets[j].length, sets[j].length, setUnits[j]);
+          for (let g = 0; g < offset; g++) total += multiplicity[g] * sizeOf[g];
+          if (fast) return fast(multiplicity, total);
           for (let i = 0; i < counts.length; i++) counts[i] = multiplicity[clusterOf[i]];
         }
         return ctx.statistic.fromCounts(counts, total);
@@ -88,7 +103,7 @@ export const cluster = defineScheme({
  * the same value as the row-count evaluation up to the order of the additions. Null for
  * other statistics.
  */
-export function clusterSums(ctx: SchemeContext, sets: Int32Array[][], count: number): ((multiplicity: Int32Array) => number) | null {
+export function clusterSums(ctx: SchemeContext, sets: Int32Array[][], count: number): ((multiplicity: Int32Array, total: number) => number) | null {
   const name = ctx.statisticName;
   if (name !== 'mean' && name !== 'mean-difference') return null;
   const x = ctx.data.values.x;
@@ -139,4 +154,35 @@ export function clusterSums(ctx: SchemeContext, sets: Int32Array[][], count: num
     }
     return s1 / m1 - s2 / m2;
   };
+}
+
+/**
+ * Fast path for the median under first-stage cluster resampling: the values sorted once,
+ * each with its cluster's number, so the resample's order statistics are read by one scan
+ * that adds the cluster multiplicities (a G-entry table) — no row counts built. Same value
+ * as the row-count evaluation (R's median convention: the middle value, or the mean of the
+ * two middle ones). Null for other statistics.
+ */
+export function clusterMedian(ctx: SchemeContext, clusterOf: Int32Array): ((multiplicity: Int32Array, total: number) => number) | null {
+  if (ctx.statisticName !== 'median') return null;
+  const x = ctx.data.values.x;
+  if (!x) return null;
+  const order = Int32Array.from(x, (_, i) => i).sort((a, b) => x[a] - x[b]);
+  const sorted = Float64Array.from(order, (i) => x[i]);
+  const clusterSorted = Int32Array.from(order, (i) => clusterOf[i]);
+  const m = sorted.length;
+  /** value at 0-based rank r of the resample, and (when wanted) at r + 1 */
+  const at = (c: Int32Array, r: number, pair: boolean): number => {
+    let cum = 0;
+    let p = 0;
+    for (; p < m; p++) {
+      cum += c[clusterSorted[p]];
+      if (cum > r) break;
+    }
+    if (!pair || cum > r + 1) return sorted[p];
+    let q = p + 1;
+    while (q < m && c[clusterSorted[q]] === 0) q++;
+    return (sorted[p] + (q < m ? sorted[q] : sorted[p])) / 2;
+  };
+  return (c, total) => (total % 2 === 1 ? at(c, (total - 1) / 2, false) : at(c, total / 2 - 1, true));
 }

@@ -1,6 +1,6 @@
 import * as z from 'zod';
-import { movingBlockMean } from '../structured/block-sums';
-import { addMovingBlockCounts } from '../structured/moving-block-counts';
+import { movingBlockMeanFromStarts } from '../structured/block-sums';
+import { addMovingBlockCountsFromStarts, blockCount } from '../structured/moving-block-counts';
 import { chooseBlockLength } from './block-length-choice';
 import { seriesStrata } from './series-strata';
 import { meanFastPath } from './block-mean-fast-path';
@@ -34,18 +34,26 @@ export const movingBlock = defineScheme({
     const l = choice.value;
     const counts = new Int32Array(ctx.n);
     const fast = meanFastPath(ctx, strata);
+    const blocks = strata.map((units) => blockCount(units.length, l));
+    const starts = new Int32Array(Math.max(...blocks));
     return {
       description: `moving-block bootstrap (circular), blocks of ${l} consecutive rows${choice.method === 'auto' ? ' (length chosen by the Politis–White rule)' : ''}${strata.length > 1 ? ', within each group' : ''}`,
       plainResampling: false,
       details: { variant: 'circular', blockLength: l, blockLengthMethod: choice.method, ...(choice.auto ? { auto: choice.auto } : {}) },
       replicate(rng) {
-        const random = () => rng.double();
+        // block starts by the engine's unbiased bulk index draws, series after series
         if (fast) {
-          const a = movingBlockMean(fast[0], l, random);
-          return fast.length === 1 ? a : a - movingBlockMean(fast[1], l, random);
+          rng.fillIndices(starts, 0, fast[0].m, blocks[0]);
+          const a = movingBlockMeanFromStarts(fast[0], l, starts);
+          if (fast.length === 1) return a;
+          rng.fillIndices(starts, 0, fast[1].m, blocks[1]);
+          return a - movingBlockMeanFromStarts(fast[1], l, starts);
         }
         counts.fill(0);
-        for (const units of strata) addMovingBlockCounts(units, l, random, counts);
+        strata.forEach((units, j) => {
+          rng.fillIndices(starts, 0, units.length, blocks[j]);
+          addMovingBlockCountsFromStarts(units, l, starts, counts);
+        });
         return ctx.statistic.fromCounts(counts, ctx.n);
       },
     };

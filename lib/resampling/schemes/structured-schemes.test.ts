@@ -40,6 +40,13 @@ describe('fast paths give the replicates of the count-based path', () => {
     same(r({ name: 'mean', column: 'x' }), r({ name: 'trimmed-mean', column: 'x', trim: 0 }));
   });
 
+  it('cluster median by the sorted scan = quantile p = 0.5 (type 7) from counts, odd and even totals', () => {
+    // unequal cluster sizes (1 … 4 rows) so that resample sizes are both odd and even
+    const site = daily.map((_, i) => `S${Math.floor(Math.sqrt(i * 3))}`);
+    const r = (statistic: object) => runRequest({ data: { x: daily, site }, statistic, scheme: { name: 'cluster', by: 'site' }, B: 600, seed: 'fast', include: ['replicates'] }).replicates!;
+    expect(r({ name: 'median', column: 'x' })).toEqual(r({ name: 'quantile', column: 'x', p: 0.5 }));
+  });
+
   it('cluster difference of means by cluster sums = the statistic on expanded counts', () => {
     const g = daily.map((_, i) => (i < 140 ? 'up' : 'down'));
     const site = daily.map((_, i) => `S${Math.floor(i / 10)}`);
@@ -54,7 +61,7 @@ describe('fast paths give the replicates of the count-based path', () => {
       const counts = new Int32Array(problem.n);
       const total = addClusterCounts(clusters, random, counts);
       const mult = Int32Array.from(clusters, (rows) => counts[rows[0]]);
-      expect(f(mult)).toBeCloseTo(stat.fromCounts(counts, total), 12);
+      expect(f(mult, total)).toBeCloseTo(stat.fromCounts(counts, total), 12);
     }
   });
 });

@@ -40,6 +40,20 @@ export function movingBlockMean(b: BlockSums, l: number, random: () => number): 
   return b.mean + s / m;
 }
 
+/** movingBlockMean with the block starts given (⌈m/l⌉ of them, each in 0 … m−1). */
+export function movingBlockMeanFromStarts(b: BlockSums, l: number, starts: ArrayLike<number>): number {
+  const { prefix, m } = b;
+  let left = m;
+  let s = 0;
+  for (let k = 0; left > 0; k++) {
+    const pos = starts[k];
+    const take = Math.min(l, left);
+    s += prefix[pos + take] - prefix[pos];
+    left -= take;
+  }
+  return b.mean + s / m;
+}
+
 /** Mean of one stationary-bootstrap resample (geometric block lengths, mean l) of the series. */
 export function stationaryMean(b: BlockSums, l: number, random: () => number): number {
   const { prefix, m } = b;

@@ -34,3 +34,26 @@ export function addMovingBlockCounts(
     left -= take;
   }
 }
+
+/** Number of blocks in one moving-block resample of m units: ⌈m/ℓ⌉. */
+export function blockCount(m: number, blockLength: number): number {
+  return Math.ceil(m / blockLength);
+}
+
+/**
+ * addMovingBlockCounts with the block starts given (blockCount(m, ℓ) of them, each in
+ * 0 … m−1) — for callers that draw the starts in bulk with their own generator.
+ */
+export function addMovingBlockCountsFromStarts(units: ArrayLike<number>, blockLength: number, starts: ArrayLike<number>, counts: Int32Array): void {
+  const m = units.length;
+  let left = m;
+  for (let b = 0; left > 0; b++) {
+    let pos = starts[b];
+    const take = Math.min(blockLength, left);
+    for (let j = 0; j < take; j++) {
+      counts[units[pos]]++;
+      if (++pos === m) pos = 0;
+    }
+    left -= take;
+  }
+}
