@@ -1,9 +1,11 @@
 import 'server-only';
-import { availableParallelism } from 'node:os';
 import { chunkCount, chunkRange, drawAll, type EngineResponse, EngineError, finalize, parseRequest, prepareProblem, type Problem } from '@/lib/resampling';
 import { needsInnerSe, runChunkInto } from '@/lib/resampling/replicates/run-chunk';
-import { type Drawn, EnginePool } from './pool';
+import type { Drawn } from './pool';
+import { defaultWorkers, INLINE_DRAWS, poolFor } from './shared-pool';
 import { workerFile } from './worker-file';
+
+export { closeComputePool, defaultWorkers, INLINE_DRAWS, looksLarge, prewarmCompute } from './shared-pool';
 
 export interface ComputeOptions {
   signal?: AbortSignal;
@@ -20,12 +22,6 @@ export interface ComputeOptions {
    */
   callerDraws?: boolean;
 }
-
-/** Below this many index draws a job runs on the calling thread (starting workers would cost more). */
-export const INLINE_DRAWS = 2_000_000;
-
-let pool: EnginePool | null = null;
-let poolFile: string | null = null;
 
 /**
  * Runs an engine request with its replicates spread over worker threads (one per core),
@@ -55,46 +51,6 @@ export async function compute(input: unknown, opts: ComputeOptions = {}): Promis
   return finalize(problem, drawn.theta, drawn.innerSe, () => signal?.aborted === true);
 }
 
-function poolFor(file: string, threads: number): EnginePool {
-  if (!pool || poolFile !== file || pool.size !== threads) {
-    void pool?.close();
-    pool = new EnginePool(file, threads);
-    poolFile = file;
-  }
-  return pool;
-}
-
-/** Workers a large job gets by default: one per core, less the calling thread's if it draws too. */
-export function defaultWorkers(callerDraws: boolean): number {
-  const cores = availableParallelism();
-  return callerDraws ? cores - 1 : Math.max(1, cores);
-}
-
-/**
- * Starts the worker threads ahead of the first compute() (the CLI calls it once the request
- * text is parsed and looks large, so the workers start while the request is validated and
- * prepared). Only when the worker bundle's path is already known (MARGIN_ENGINE_WORKER), so
- * it never triggers a build.
- */
-export function prewarmCompute(threads: number): void {
-  const file = process.env.MARGIN_ENGINE_WORKER;
-  if (file && threads > 0) poolFor(file, threads).warm();
-}
-
-/**
- * A cheap guess, before validation, whether a request will go to worker threads: B times
- * the longest data column against INLINE_DRAWS. Only decides whether to start workers
- * early; compute() decides from the prepared request.
- */
-export function looksLarge(input: unknown): boolean {
-  if (!input || typeof input !== 'object') return false;
-  const { B, data } = input as { B?: unknown; data?: unknown };
-  if (typeof B !== 'number' || !data || typeof data !== 'object') return false;
-  let n = 0;
-  for (const column of Object.values(data)) if (Array.isArray(column)) n = Math.max(n, column.length);
-  return n * B >= INLINE_DRAWS;
-}
-
 async function drawInWorkers(problem: Problem, threads: number, opts: ComputeOptions): Promise<Drawn> {
   const file = await workerFile();
   const pool = poolFor(file, threads);
@@ -111,17 +67,11 @@ async function drawInWorkers(problem: Problem, threads: number, opts: ComputeOpt
   });
 }
 
-/** Closes the worker pool (tests). */
-export async function closeComputePool(): Promise<void> {
-  const p = pool;
-  pool = null;
-  await p?.close();
-}
-
 function drawsOf(problem: Problem): number {
   const { B, intervals } = problem.request;
   const inner = intervals.methods.includes('studentized') ? (intervals.studentized.se === 'bootstrap' ? intervals.studentized.innerB : problem.n) : 0;
-  return problem.n * B * (1 + inner);
+  // a scheme with a cheaper replicate (block sums, cluster sums) says how much work one costs
+  return (problem.scheme.workPerReplicate ?? problem.n) * B * (1 + inner);
 }
 
 function abortReason(signal: AbortSignal): unknown {

@@ -66,6 +66,8 @@ export const cluster = defineScheme({
     return {
       description: `cluster bootstrap, the ${clusters.length} clusters of ${s.by} resampled whole${s.secondStage ? ', then rows resampled within each drawn cluster' : ''}${withinGroups ? ', within each group' : ''}`,
       plainResampling: false,
+      // the mean's cluster sums cost O(G); the median's scan and the count path O(n)
+      workPerReplicate: fast && ctx.statisticName !== 'median' ? 4 * offset : undefined,
       details: { by: s.by, clusters: clusters.length, secondStage: s.secondStage, withinGroups, smallestCluster: Math.min(...sizes), largestCluster: Math.max(...sizes) },
       replicate(rng) {
         // Draws: G uniform cluster indices per set by the engine's unbiased bulk draws

@@ -39,6 +39,8 @@ export const movingBlock = defineScheme({
     return {
       description: `moving-block bootstrap (circular), blocks of ${l} consecutive rows${choice.method === 'auto' ? ' (length chosen by the Politis–White rule)' : ''}${strata.length > 1 ? ', within each group' : ''}`,
       plainResampling: false,
+      // block sums of the mean cost O(n/ℓ) per replicate
+      workPerReplicate: fast ? 4 * Math.ceil(ctx.n / l) : undefined,
       details: { variant: 'circular', blockLength: l, blockLengthMethod: choice.method, ...(choice.auto ? { auto: choice.auto } : {}) },
       replicate(rng) {
         // block starts by the engine's unbiased bulk index draws, series after series

@@ -33,6 +33,8 @@ export const stationary = defineScheme({
     return {
       description: `stationary bootstrap, geometric block lengths with mean ${round(l)} rows${choice.method === 'auto' ? ' (chosen by the Politis–White rule)' : ''}${strata.length > 1 ? ', within each group' : ''}`,
       plainResampling: false,
+      // block sums of the mean cost O(n/ℓ) per replicate
+      workPerReplicate: fast ? 4 * Math.ceil(ctx.n / l) : undefined,
       details: { variant: 'circular', meanBlockLength: l, blockLengthMethod: choice.method, ...(choice.auto ? { auto: choice.auto } : {}) },
       replicate(rng) {
         const random = () => rng.double();

@@ -49,6 +49,11 @@ export interface PreparedScheme {
   readonly counting?: CountingScheme;
   /** Closed-form and order-statistic exact answers assume plain resampling of the sample. */
   readonly plainResampling: boolean;
+  /**
+   * Rough cost of one replicate in index draws, when it is not n (the O(n/ℓ) block sums or
+   * O(G) cluster sums of the mean): lib/compute uses it to decide whether worker threads pay.
+   */
+  readonly workPerReplicate?: number;
   /** Settings the scheme resolved (block length chosen, fitted parameters …), copied to the response's `scheme`. */
   readonly details?: Record<string, unknown>;
 }
