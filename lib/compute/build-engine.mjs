@@ -1,10 +1,16 @@
 // Builds the engine's plain-JavaScript bundles with esbuild, for worker threads and the
-// command line: dist/engine/worker.mjs (the worker entry) and dist/engine/cli.mjs.
-// Worker threads need plain JS found at run time (under vitest, the CLI and `next start`
-// alike), so the bundle is resolved from the project root and rebuilt when any source file
-// under lib/resampling or lib/compute changed (a signature of paths, sizes and mtimes is
-// kept in dist/engine/stamp.json). Builds go to a temporary folder and are renamed into
-// place, so concurrent builders never leave a half-written file.
+// command line: dist/engine/worker.cjs (the worker entry) and dist/engine/cli.mjs (with the
+// engine in a chunk of its own, chunk-*.mjs, that the command line imports only after it has
+// started its workers). Worker threads need plain JS found at run time (under vitest, the
+// CLI and `next start` alike), so the bundle is resolved from the project root and rebuilt
+// when any source file under lib/resampling or lib/compute changed (a signature of paths,
+// sizes and mtimes is kept in dist/engine/stamp.json). Builds go to a temporary folder and
+// are renamed into place, so concurrent builders never leave a half-written file.
+//
+// Start-up cost is what the two shapes are for: a worker thread starts faster from
+// CommonJS (no ES module loader to set up in the new thread), and without zod — requests are
+// validated on the main thread, so in the worker bundle zod's exports are inert stand-ins that
+// only build unused schemas (and throw if anything ever parses with one there).
 //
 //   node lib/compute/build-engine.mjs            build if stale, print the bundle folder
 //   node lib/compute/build-engine.mjs --force    always rebuild
@@ -17,6 +23,9 @@ const SOURCE_DIRS = ['lib/resampling', 'lib/compute'];
 const EXTRA_FILES = ['package-lock.json', 'tsconfig.json'];
 export const BUNDLE_DIR = 'dist/engine';
 export const ENTRIES = { worker: 'lib/compute/worker-entry.ts', cli: 'lib/compute/cli.ts' };
+const WORKER_FILE = 'worker.cjs';
+/** Chunks of an older build are removed once they are this old (a process started earlier may still import one). */
+const STALE_CHUNK_MS = 60 * 60 * 1000;
 
 /** Project root: the folder holding lib/compute/build-engine.mjs. */
 export function projectRoot() {
@@ -55,19 +64,45 @@ export function sourceSignature(root = projectRoot()) {
 
 export function bundlePaths(root = projectRoot()) {
   const dir = path.join(root, BUNDLE_DIR);
-  return { dir, worker: path.join(dir, 'worker.mjs'), cli: path.join(dir, 'cli.mjs'), stamp: path.join(dir, 'stamp.json') };
+  return { dir, worker: path.join(dir, WORKER_FILE), cli: path.join(dir, 'cli.mjs'), stamp: path.join(dir, 'stamp.json') };
 }
 
 export function isFresh(root = projectRoot()) {
   const p = bundlePaths(root);
-  if (!existsSync(p.worker) || !existsSync(p.cli) || !existsSync(p.stamp)) return false;
-  // Without sources (a deployment of dist/ only) the bundle is all there is.
-  if (!existsSync(path.join(root, ENTRIES.worker))) return true;
+  let stamp;
   try {
-    return JSON.parse(readFileSync(p.stamp, 'utf8')).signature === sourceSignature(root);
+    stamp = JSON.parse(readFileSync(p.stamp, 'utf8'));
   } catch {
     return false;
   }
+  if (!Array.isArray(stamp.files) || !stamp.files.every((f) => existsSync(path.join(p.dir, f)))) return false;
+  // Without sources (a deployment of dist/ only) the bundle is all there is.
+  if (!existsSync(path.join(root, ENTRIES.worker))) return true;
+  return stamp.signature === sourceSignature(root);
+}
+
+const serverOnlyEmpty = {
+  name: 'server-only-empty',
+  setup(b) {
+    b.onResolve({ filter: /^server-only$/ }, () => ({ path: 'server-only', namespace: 'empty' }));
+    b.onLoad({ filter: /.*/, namespace: 'empty' }, () => ({ contents: '', loader: 'js' }));
+  },
+};
+
+/** zod for the worker bundle: every export of the real package, each an inert chainable stand-in. */
+async function inertZod() {
+  const names = Object.keys(await import('zod')).filter((n) => n !== 'default');
+  const contents = `const refuse = () => { throw new Error('zod is not loaded in the engine worker: requests are validated on the main thread'); };
+const inert = new Proxy(function () {}, { get: (_t, key) => (key === 'parse' || key === 'safeParse' || key === 'parseAsync' || key === 'safeParseAsync' ? refuse : inert), apply: () => inert });
+export { ${names.map((n) => `inert as ${n}`).join(', ')} };
+export default inert;`;
+  return {
+    name: 'inert-zod',
+    setup(b) {
+      b.onResolve({ filter: /^zod$/ }, () => ({ path: 'zod', namespace: 'inert-zod' }));
+      b.onLoad({ filter: /.*/, namespace: 'inert-zod' }, () => ({ contents, loader: 'js' }));
+    },
+  };
 }
 
 /** Builds both bundles (always). Returns the bundle paths. */
@@ -78,35 +113,46 @@ export async function build(root = projectRoot()) {
   const tmp = path.join(root, 'dist', `.engine-build-${process.pid}-${Date.now()}`);
   mkdirSync(tmp, { recursive: true });
   try {
-    await esbuild.build({
+    const common = {
       absWorkingDir: root,
-      entryPoints: { worker: ENTRIES.worker, cli: ENTRIES.cli },
       outdir: tmp,
-      outExtension: { '.js': '.mjs' },
       bundle: true,
       platform: 'node',
-      format: 'esm',
       target: 'node20',
       sourcemap: false,
       minify: true,
       legalComments: 'none',
       logLevel: 'error',
       tsconfig: path.join(root, 'tsconfig.json'),
+      metafile: true,
+    };
+    const cli = await esbuild.build({
+      ...common,
+      entryPoints: { cli: ENTRIES.cli },
+      format: 'esm',
+      splitting: true,
+      chunkNames: 'chunk-[hash]',
+      outExtension: { '.js': '.mjs' },
       // Bundled CommonJS dependencies (seedrandom) may call require at run time.
       banner: { js: "import { createRequire as __marginCreateRequire } from 'node:module'; const require = __marginCreateRequire(import.meta.url);" },
-      plugins: [
-        {
-          name: 'server-only-empty',
-          setup(b) {
-            b.onResolve({ filter: /^server-only$/ }, () => ({ path: 'server-only', namespace: 'empty' }));
-            b.onLoad({ filter: /.*/, namespace: 'empty' }, () => ({ contents: '', loader: 'js' }));
-          },
-        },
-      ],
+      plugins: [serverOnlyEmpty],
     });
-    writeFileSync(path.join(tmp, 'stamp.json'), JSON.stringify({ signature, builtAt: new Date().toISOString() }));
+    const worker = await esbuild.build({
+      ...common,
+      entryPoints: { worker: ENTRIES.worker },
+      format: 'cjs',
+      outExtension: { '.js': '.cjs' },
+      plugins: [serverOnlyEmpty, await inertZod()],
+    });
+    const files = [...Object.keys(cli.metafile.outputs), ...Object.keys(worker.metafile.outputs)].map((f) => path.basename(f));
+    writeFileSync(path.join(tmp, 'stamp.json'), JSON.stringify({ signature, files, builtAt: new Date().toISOString() }));
     mkdirSync(p.dir, { recursive: true });
-    for (const f of ['worker.mjs', 'cli.mjs', 'stamp.json']) renameSync(path.join(tmp, f), path.join(p.dir, f));
+    // Chunks first, the entry files and the stamp last: a reader never sees an entry whose chunk is missing.
+    const ordered = [...files.filter((f) => f.startsWith('chunk-')), ...files.filter((f) => !f.startsWith('chunk-')), 'stamp.json'];
+    for (const f of ordered) renameSync(path.join(tmp, f), path.join(p.dir, f));
+    for (const f of readdirSync(p.dir)) {
+      if (f.startsWith('chunk-') && !files.includes(f) && Date.now() - statSync(path.join(p.dir, f)).mtimeMs > STALE_CHUNK_MS) rmSync(path.join(p.dir, f), { force: true });
+    }
   } finally {
     rmSync(tmp, { recursive: true, force: true });
   }

@@ -7,8 +7,8 @@
  * Bundled to dist/engine/cli.mjs and started by scripts/compute.mjs.
  */
 import { readFileSync } from 'node:fs';
-import { EngineError } from '@/lib/resampling';
-import { compute, defaultWorkers, looksLarge, prewarmCompute } from './index';
+import { EngineError } from '@/lib/resampling/errors';
+import { defaultWorkers, looksLarge, prewarmCompute } from './shared-pool';
 
 function usage(message: string): never {
   process.stdout.write(`${JSON.stringify({ error: { code: 'bad_request:usage', message, path: '' } })}\n`);
@@ -50,9 +50,11 @@ export async function main(argv: string[]): Promise<void> {
     return finish(JSON.stringify({ error: { code: 'bad_request:json', message: `the request is not valid JSON: ${(e as Error).message}`, path: '' } }), 1);
   }
   // A large request goes to worker threads: start them now, so that they start up while
-  // this thread validates and prepares the request.
+  // this thread loads the engine (a separate chunk of the bundle, imported only now) and
+  // validates and prepares the request.
   if (threads !== 0 && looksLarge(input)) prewarmCompute(threads ?? defaultWorkers(true));
   try {
+    const { compute } = await import('./index');
     const response = await compute(input, {
       threads,
       callerDraws: true,

@@ -42,6 +42,54 @@ describe('compute() in worker threads', () => {
     expect(JSON.stringify(await compute(req, { threads: 2 }))).toBe(JSON.stringify(runRequest(req)));
   }, 120_000);
 
+  it('gives the same replicates as runRequest for every statistic and scheme, drawn by a worker alone', async () => {
+    // The worker bundle has no zod (build-engine.mjs): this shows that preparing a problem
+    // there never needs a schema. With a warm pool the calling thread leaves every chunk to
+    // the worker.
+    await compute(big, { threads: 1 });
+    const x = daily.slice(0, 240);
+    const y = x.map((v, i) => Math.round((0.4 * v + ((i * 37) % 11) / 10) * 100) / 100);
+    const site = x.map((_, i) => `S${i % 12}`);
+    const side = x.map((_, i) => (i % 3 ? 'downstream' : 'upstream'));
+    const data = { x, y, site, side, day: x.map((_, i) => i) };
+    const two = { column: 'x', group: 'side', levels: ['downstream', 'upstream'] };
+    const statistics = [
+      { name: 'mean', column: 'x' },
+      { name: 'median', column: 'x' },
+      { name: 'trimmed-mean', column: 'x', trim: 0.2 },
+      { name: 'quantile', column: 'x', p: 0.9 },
+      { name: 'variance', column: 'x' },
+      { name: 'sd', column: 'x' },
+      { name: 'mad', column: 'x' },
+      { name: 'iqr', column: 'x' },
+      { name: 'geometric-mean', column: 'x' },
+      { name: 'cv', column: 'x' },
+      { name: 'correlation', x: 'x', y: 'y', method: 'spearman' },
+      { name: 'ratio-of-means', numerator: 'y', denominator: 'x' },
+      { name: 'mean-difference', ...two },
+      { name: 'median-difference', ...two },
+      { name: 'regression-slope', x: 'day', y: 'x' },
+      { name: 'regression-intercept', x: 'day', y: 'x' },
+    ];
+    const schemes: [object, object][] = [
+      [{ name: 'stratified', by: 'site' }, { name: 'median', column: 'x' }],
+      [{ name: 'cluster', by: 'site' }, { name: 'mean', column: 'x' }],
+      [{ name: 'parametric', family: 'lognormal' }, { name: 'median', column: 'x' }],
+      [{ name: 'residual' }, { name: 'regression-slope', x: 'day', y: 'x' }],
+      [{ name: 'moving-block', blockLength: 'auto' }, { name: 'mean', column: 'x' }],
+      [{ name: 'stationary', meanBlockLength: 6 }, { name: 'median', column: 'x' }],
+    ];
+    const requests = [
+      ...statistics.map((statistic) => ({ statistic })),
+      ...schemes.map(([scheme, statistic]) => ({ scheme, statistic })),
+      { statistic: { name: 'mean', column: 'x' }, intervals: { methods: ['studentized'], studentized: { se: 'jackknife' } } },
+    ].map((r, i) => ({ data, B: 1100, seed: `every-${i}`, intervals: { methods: ['percentile', 'bca'] }, include: ['replicates'], ...r }));
+    for (const request of requests) {
+      const expected = JSON.stringify(runRequest(request));
+      expect(JSON.stringify(await compute(request, { threads: 1 })), JSON.stringify(request.statistic)).toBe(expected);
+    }
+  }, 120_000);
+
   it('reports progress up to B', async () => {
     const seen: number[] = [];
     await compute(big, { threads: 2, onProgress: (done, total) => (expect(total).toBe(3300), seen.push(done)) });

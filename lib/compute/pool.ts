@@ -1,7 +1,8 @@
 import 'server-only';
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
-import { EngineError, type EngineRequest } from '@/lib/resampling';
+import type { EngineRequest } from '@/lib/resampling';
+import { EngineError } from '@/lib/resampling/errors';
 import { CLAIMED, FINISHED, type FromWorker, type JobBuffers, type ToWorker } from './protocol';
 
 export interface Drawn {

@@ -2,7 +2,7 @@
  * Engine worker thread: for each job it is given, prepares the job's Problem (the same
  * deterministic preparation as the main thread), then claims chunks from the job's shared
  * counter and draws them straight into the job's shared replicate arrays until none is left
- * (protocol.ts). Bundled to dist/engine/worker.mjs (build-engine.mjs).
+ * (protocol.ts). Bundled to dist/engine/worker.cjs (build-engine.mjs).
  */
 import { parentPort } from 'node:worker_threads';
 import { prepareProblem } from '@/lib/resampling/engine/prepare';
