@@ -135,3 +135,8 @@ console.log(`\nwritten: bench/results/resampling.json`);
 function os(): number {
   return availableParallelism();
 }
+
+// Structured-data cases (issue 4): block and cluster bootstraps vs R's tsboot / boot.
+console.log('');
+const { runStructuredBench } = await import('./structured');
+runStructuredBench();

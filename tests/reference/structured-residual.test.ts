@@ -35,6 +35,7 @@ describe('residual scheme (fixed design) on cars', () => {
   it('case resampling (ordinary): SE ≈ R boot over rows, with a note that cases were resampled', () => {
     const r = runRequest({ data, statistic: slope, B, seed: 'cars' });
     expect(Math.abs(r.se! / R.cars_cases[0] - 1)).toBeLessThan(0.04);
+    expect(r.scheme).toEqual({ name: 'ordinary', regression: 'cases' });
     expect(r.warnings.map((w) => w.code)).toContain('regression-cases');
   });
 

@@ -140,7 +140,8 @@ export function finalize(problem: Problem, theta: Float64Array, innerSe: Float64
     convergence: req.include.includes('convergence') ? convergenceSeries(theta, innerT, estimate, level, methods, acceleration, se0, finite) : null,
     advice: adviseB(sorted.length, se, m?.excessKurtosis ?? 0, endPointErrors),
     warnings,
-    scheme: { name: req.scheme.name, ...problem.scheme.details },
+    // regression: say whether cases (rows) or residuals were resampled
+    scheme: { name: req.scheme.name, ...(req.statistic.name.startsWith('regression-') && req.scheme.name !== 'residual' ? { regression: 'cases' } : {}), ...problem.scheme.details },
     test: runTest(problem),
     provenance: {
       engine: ENGINE_VERSION,
