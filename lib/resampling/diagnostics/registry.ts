@@ -1,5 +1,6 @@
 import type { Warning } from '../contract/response';
 import { degenerateReplicates } from './degenerate-replicates';
+import { dependentJackknife } from './dependent-jackknife';
 import { droppedValues } from './dropped-values';
 import { extremeStatistic } from './extreme-statistic';
 import { heavyTies } from './heavy-ties';
@@ -32,6 +33,7 @@ export const DIAGNOSTICS: readonly Diagnostic[] = [
   skewedReplicates,
   replicateOutliers,
   nonSmoothJackknife,
+  dependentJackknife,
   intervalNotes,
 ];
 

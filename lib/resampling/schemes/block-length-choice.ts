@@ -7,7 +7,7 @@ export interface BlockLengthChoice {
   value: number;
   method: 'given' | 'auto';
   /** for "auto": the rule's m̂, bandwidth M, cap, and the uncapped value */
-  auto?: { column: string; mHat: number; M: number; cap: number; raw: number; capped: boolean };
+  auto?: { column: string; mHat: number; M: number; cap: number; raw: number | null; capped: boolean };
 }
 
 /**
@@ -47,7 +47,9 @@ export function chooseBlockLength(
         }
         throw e;
       }
-      const raw = kind === 'circular' ? r.raw.circular : r.raw.stationary;
+      const rawValue = kind === 'circular' ? r.raw.circular : r.raw.stationary;
+      // the uncapped value is Infinity when the long-run variance estimate is 0: report null
+      const raw = Number.isFinite(rawValue) ? rawValue : null;
       const chosen = kind === 'circular' ? r.circular : r.stationary;
       const value = kind === 'circular' ? Math.max(1, Math.round(chosen)) : chosen;
       if (!best || value > best.value) {

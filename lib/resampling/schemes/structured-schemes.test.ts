@@ -67,6 +67,23 @@ describe('fast paths give the replicates of the count-based path', () => {
 });
 
 describe('scheme details in the response', () => {
+  it('BCa under a cluster or block scheme warns that the jackknife leaves out rows; responses hold no NaN or Infinity', () => {
+    const site = daily.map((_, i) => `S${i % 30}`);
+    for (const scheme of [{ name: 'cluster', by: 'site' }, { name: 'moving-block', blockLength: 'auto' }, { name: 'stationary', meanBlockLength: 'auto' }]) {
+      const r = runRequest({ data: { x: daily, site }, statistic: { name: 'sd', column: 'x' }, scheme, B: 300, intervals: { methods: ['percentile', 'bca'] }, include: ['jackknife', 'convergence'] });
+      expect(r.warnings.map((w) => w.code)).toContain('jackknife-rows');
+      const bad = (v: unknown): boolean => (typeof v === 'number' ? !Number.isFinite(v) : v && typeof v === 'object' ? Object.values(v).some(bad) : false);
+      expect(bad(r)).toBe(false);
+    }
+  });
+
+  it('a parametric model that makes the statistic undefined on some samples still answers without NaN', () => {
+    // a normal model for a geometric mean: simulated samples with values ≤ 0 give no estimate
+    const r = runRequest({ data: { x: [0.2, 0.5, 0.3, 1.4, 0.9, 0.25, 0.6, 0.4] }, statistic: { name: 'geometric-mean', column: 'x' }, scheme: { name: 'parametric', family: 'normal' }, B: 400 });
+    expect(r.replicatesUsed).toBeLessThan(400);
+    expect(JSON.stringify(r)).not.toMatch(/NaN|Infinity/);
+  });
+
   it('moving-block "auto" reports the rule\'s numbers; circular variant', () => {
     const r = runRequest({ data: { x: daily }, statistic: { name: 'median', column: 'x' }, scheme: { name: 'moving-block', blockLength: 'auto' }, B: 200 });
     expect(r.scheme).toMatchObject({ name: 'moving-block', variant: 'circular', blockLengthMethod: 'auto', auto: { column: 'x' } });
