@@ -40,7 +40,11 @@ export function EstimateView(props: NodeViewProps) {
             <span className="text-ink-soft">{STATISTIC_LABEL[attrs.statistic.name as StatisticName] ?? 'θ̂'} = </span>
             <span className="tabular">{formatNumber(out.response.estimate, out.response.se)}</span>
             {out.response.se !== null && <span className="ml-2 text-lg text-ink-soft">(SE {formatNumber(out.response.se, out.response.se)})</span>}
-            {state.stale && <span className="ml-3 align-middle font-sans text-xs text-amber">stale — recomputing</span>}
+            {state.stale && (
+              <span className="ml-3 align-middle font-sans text-xs text-amber">
+                {state.waiting || state.run?.state === 'queued' || state.run?.state === 'running' ? 'stale — recomputing' : 'stale — not for the present settings'}
+              </span>
+            )}
           </p>
           <p className="mt-1 text-xs text-ink-faint">
             n = {out.n}, B = {out.response.B} ({out.response.replicatesUsed} usable replicates)

@@ -1,6 +1,6 @@
 'use client';
 
-import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { keepPreviousData, useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { useEffect, useRef, useState } from 'react';
 import type { RunSettingsResult } from '@/blocks/shared/types';
 import { canonicalJson } from '@/lib/runs/canonical-json';
@@ -20,6 +20,50 @@ function useDebounced<T>(value: T, ms: number): T {
 }
 
 const inProgress = (r: RunView | null | undefined) => !!r && (r.state === 'queued' || r.state === 'running');
+
+/**
+ * Follows a computing run through its server-sent events (GET /api/runs/:id/events):
+ * progress as it moves, then the finished run, written into the same query cache entry the
+ * polling fallback uses. Returns true when the stream failed for this run, so the caller
+ * polls instead (every 150 ms, as before).
+ */
+function useRunEvents(run: RunView | undefined, client: QueryClient): boolean {
+  const [failed, setFailed] = useState<number | null>(null);
+  const id = run && inProgress(run) ? run.id : null;
+  const base = useRef(run);
+  base.current = run;
+  useEffect(() => {
+    if (id === null || failed === id) return;
+    if (typeof EventSource === 'undefined') return setFailed(id);
+    const es = new EventSource(`/api/runs/${id}/events`);
+    let finished = false;
+    es.addEventListener('progress', (e) => {
+      const p = JSON.parse((e as MessageEvent<string>).data) as { state: RunView['state']; progress: number };
+      client.setQueryData<RunView>(['run-poll', id], (old) => {
+        const prev = old ?? base.current;
+        return prev && prev.id === id && inProgress(prev) ? { ...prev, state: p.state, progress: p.progress } : prev;
+      });
+    });
+    es.addEventListener('run', (e) => {
+      finished = true;
+      es.close();
+      client.setQueryData<RunView>(['run-poll', id], JSON.parse((e as MessageEvent<string>).data) as RunView);
+    });
+    const fail = () => {
+      if (finished) return;
+      es.close();
+      setFailed(id);
+    };
+    es.addEventListener('failure', fail);
+    es.addEventListener('gone', fail);
+    es.onerror = fail;
+    return () => {
+      finished = true;
+      es.close();
+    };
+  }, [id, failed, client]);
+  return id !== null && failed === id;
+}
 
 /**
  * A computing block's run, through react-query: asks the server for the result of the
@@ -46,9 +90,10 @@ export function useBlockRun(blockId: string | null, type: string, rs: RunSetting
     retry: false,
   });
   const run = query.isPlaceholderData ? undefined : query.data;
+  const streamFailed = useRunEvents(run, client);
   const poll = useQuery<RunView, ApiError>({
     queryKey: ['run-poll', run?.id],
-    enabled: inProgress(run),
+    enabled: inProgress(run) && streamFailed,
     queryFn: ({ signal }) => fetchRun(run!.id, signal),
     refetchInterval: (q) => (q.state.data && !inProgress(q.state.data) ? false : 150),
     retry: false,

@@ -1,5 +1,5 @@
 // Authorization rows: memos (list, create, read, autosave, rename/archive, duplicate), block
-// runs, Data table rows and edits, SVG export, and run status / cancel.
+// runs, Data table rows and edits, SVG export, and run status / progress events / cancel.
 import { ESTIMATE_DEFAULTS } from '@/blocks/estimate';
 import { importCsv } from '@/lib/datasets';
 import { createMemo } from '@/lib/memos';
@@ -95,5 +95,6 @@ export default [
     allowed: MEMBERS,
   },
   { method: 'GET', path: '/api/runs/[runId]', request: async (f) => ({ params: { runId: String((await memo(f, { computed: true })).runId) } }), allowed: MEMBERS },
+  { method: 'GET', path: '/api/runs/[runId]/events', request: async (f) => ({ params: { runId: String((await memo(f, { computed: true })).runId) } }), allowed: MEMBERS },
   { method: 'POST', path: '/api/runs/[runId]/cancel', request: async (f) => ({ params: { runId: String((await memo(f, { computed: true })).runId) }, body: {} }), allowed: AUTHORS_UP },
 ] satisfies AuthzRow[];
