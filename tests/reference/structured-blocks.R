@@ -15,3 +15,9 @@ emit("huron", LakeHuron); emit("huron_fixed_6_median", sd(b$t))
 # the ordinary bootstrap of the same mean, for contrast
 b <- boot(as.numeric(lynx), function(d, i) mean(d[i]), R = R)
 emit("lynx_ordinary", sd(b$t))
+# identical resamples: tsboot's own index arrays (boot.array), to replay in the engine
+set.seed(11)
+b <- tsboot(as.numeric(LakeHuron), median, R = 200, l = 6, sim = "fixed")
+a <- boot.array(b, indices = TRUE)
+emit("huron_idx", t(a) - 1)  # 0-based, resample after resample
+emit("huron_t", b$t)

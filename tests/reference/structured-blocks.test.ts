@@ -2,6 +2,8 @@ import { readFileSync } from 'node:fs';
 import seedrandom from 'seedrandom';
 import { describe, expect, it } from 'vitest';
 import { ar1OptimalBlockLength } from '@/lib/resampling/blocklength';
+import { STATISTICS } from '@/lib/resampling/statistics/registry';
+import { addMovingBlockCountsFromStarts, blockCount } from '@/lib/resampling/structured';
 import { EngineError, runRequest } from '@/lib/resampling';
 import { runR } from './structured-r';
 
@@ -59,6 +61,31 @@ describe('moving-block and stationary schemes against R boot::tsboot', () => {
     const r = run(x, { name: 'moving-block', blockLength: 19 });
     // one Monte Carlo estimate: SE/√(2B) ≈ 0.5%; allow 3%
     expect(Math.abs(r.se! / want - 1)).toBeLessThan(0.03);
+  });
+});
+
+describe('identical resamples: tsboot\'s own block starts replayed in the engine', () => {
+  it('LakeHuron, median, l = 6: the engine\'s circular blocks rebuild every R resample, and its median from counts equals R\'s replicate exactly', () => {
+    const x = Float64Array.from(R.huron);
+    const n = x.length; // 98 = 16 blocks of 6 + one of 2
+    const idx = R.huron_idx;
+    const reps = R.huron_t.length;
+    expect(idx.length).toBe(reps * n);
+    const def = STATISTICS.get('median')!;
+    const median = def.prepare({ n, values: { x } }, { name: 'median', column: 'x' } as never);
+    const units = Int32Array.from({ length: n }, (_, i) => i);
+    const k = blockCount(n, 6);
+    for (let b = 0; b < reps; b++) {
+      const row = idx.slice(b * n, (b + 1) * n);
+      // R's counts, and the engine's counts from R's block starts (every 6th index)
+      const rCounts = new Int32Array(n);
+      for (const i of row) rCounts[i]++;
+      const starts = Array.from({ length: k }, (_, j) => row[6 * j]);
+      const ours = new Int32Array(n);
+      addMovingBlockCountsFromStarts(units, 6, starts, ours);
+      expect(ours).toEqual(rCounts);
+      expect(median.fromCounts(ours, n)).toBe(R.huron_t[b]);
+    }
   });
 });
 

@@ -1,6 +1,9 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { EngineError, runRequest } from '@/lib/resampling';
+import { clusterMedian } from '@/lib/resampling/schemes/cluster';
+import type { SchemeContext } from '@/lib/resampling/schemes/types';
+import { STATISTICS } from '@/lib/resampling/statistics/registry';
 import { runR } from './structured-r';
 
 // Outside reference: R's boot package (structured-cluster.R beside this file, run live):
@@ -46,6 +49,29 @@ describe('cluster scheme on ChickWeight (50 chicks, repeated weights)', () => {
     expect(e).toBeInstanceOf(EngineError);
     expect(e!.path).toBe('scheme.by');
     expect(e!.message).toMatch(/only one cluster/);
+  });
+});
+
+describe('identical resamples: boot\'s own draws of chick ids replayed in the engine', () => {
+  it('ChickWeight, median: row counts and the sorted-scan fast path both give R\'s replicates exactly', () => {
+    const x = Float64Array.from(num('cw_weight'));
+    const n = x.length;
+    const clusterOf = Int32Array.from(num('cw_cluster_of_row'));
+    const G = 50;
+    const idx = num('cw_idx');
+    const t = num('cw_median_t');
+    const median = STATISTICS.get('median')!.prepare({ n, values: { x } }, { name: 'median', column: 'x' } as never);
+    const fast = clusterMedian({ statisticName: 'median', data: { n, values: { x } } } as unknown as SchemeContext, clusterOf)!;
+    const size = new Int32Array(G);
+    for (const g of clusterOf) size[g]++;
+    for (let b = 0; b < t.length; b++) {
+      const mult = new Int32Array(G);
+      for (const g of idx.slice(b * G, (b + 1) * G)) mult[g]++;
+      const counts = Int32Array.from(clusterOf, (g) => mult[g]);
+      const total = mult.reduce((s, c, g) => s + c * size[g], 0);
+      expect(median.fromCounts(counts, total)).toBe(t[b]);
+      expect(fast(mult, total)).toBe(t[b]);
+    }
   });
 });
 
