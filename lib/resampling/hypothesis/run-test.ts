@@ -31,11 +31,21 @@ export function runTest(problem: Problem): TestResult | null {
     const data = { n, values: { [roles[0]]: pooled }, group };
     const def = problem.statisticDef;
     const settings = problem.request.statistic;
-    const statistic = (ga: Float64Array, gb: Float64Array) => {
-      pooled.set(ga, 0);
-      pooled.set(gb, ga.length);
-      return def.prepare(data, settings).estimate;
-    };
+    // any two-group statistic: re-prepared on each relabelling; the difference of means directly
+    const statistic =
+      def.name === 'mean-difference'
+        ? (ga: Float64Array, gb: Float64Array) => {
+            let sa = 0;
+            let sb = 0;
+            for (let i = 0; i < ga.length; i++) sa += ga[i];
+            for (let i = 0; i < gb.length; i++) sb += gb[i];
+            return sa / ga.length - sb / gb.length;
+          }
+        : (ga: Float64Array, gb: Float64Array) => {
+            pooled.set(ga, 0);
+            pooled.set(gb, ga.length);
+            return def.prepare(data, settings).estimate;
+          };
     let scale = 0;
     for (let i = 0; i < x.length; i++) scale = Math.max(scale, Math.abs(x[i]));
     try {
