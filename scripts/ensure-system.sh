@@ -11,7 +11,7 @@ need=()
 for what in "$@"; do
   case "$what" in
     mariadb) command -v mariadbd >/dev/null 2>&1 || [ -x /usr/sbin/mariadbd ] || need+=(mariadb-server mariadb-client) ;;
-    r) { command -v Rscript >/dev/null 2>&1 && Rscript -e 'quit(status = !requireNamespace("boot", quietly = TRUE))' >/dev/null 2>&1; } || need+=(r-base-core r-cran-boot) ;;
+    r) { command -v Rscript >/dev/null 2>&1 && Rscript -e 'quit(status = !(requireNamespace("boot", quietly = TRUE) && requireNamespace("MASS", quietly = TRUE)))' >/dev/null 2>&1; } || need+=(r-base-core r-cran-boot r-cran-mass) ;;
     chromium) [ -x /usr/bin/chromium ] || need+=(chromium) ;;
     scipy) /usr/bin/python3 -c 'import scipy' >/dev/null 2>&1 || need+=(python3-scipy) ;;
     *) echo "ensure-system: unknown component '$what'" >&2; exit 2 ;;
