@@ -133,7 +133,7 @@ describe('bad input', () => {
     expect(() => permutationTest([], [1], meanDiff)).toThrow(PermutationError);
     expect(() => permutationTest([1, NaN], [1], meanDiff)).toThrow(/value 2 of the first group/);
     expect(() => permutationTest([1, 1], [2, 2], (a, b) => (mean(a) - mean(b)) / 0 * 0)).toThrow(/zero variance/);
-    expect(() => permutationTest(R.horsebean, R.linseed, meanDiff, { B: 0, random: Math.random })).toThrow(/B must be/);
+    expect(() => permutationTest(R.horsebean, R.linseed, meanDiff, { B: 0, random: seedrandom('bad-B') })).toThrow(/B must be/);
     expect(() => permutationTest(R.horsebean, R.linseed, meanDiff)).toThrow(/random source/);
     expect(() =>
       permutationTest([1], [2], meanDiff, { alternative: 'both' as unknown as 'less' }),
