@@ -21,11 +21,18 @@ function useDebounced<T>(value: T, ms: number): T {
 
 const inProgress = (r: RunView | null | undefined) => !!r && (r.state === 'queued' || r.state === 'running');
 
+// Event streams open at once on this page. A browser keeps about six HTTP/1.1 connections
+// per server, and each stream holds one for the whole run: when many blocks compute at once
+// (a memo opened with twenty new results), the rest poll, so saves and run requests never
+// queue behind streams.
+const MAX_STREAMS = 2;
+let openStreams = 0;
+
 /**
  * Follows a computing run through its server-sent events (GET /api/runs/:id/events):
  * progress as it moves, then the finished run, written into the same query cache entry the
- * polling fallback uses. Returns true when the stream failed for this run, so the caller
- * polls instead (every 150 ms, as before).
+ * polling fallback uses. Returns true when this run is to be polled instead (every 150 ms):
+ * the stream failed, or enough streams are open already.
  */
 function useRunEvents(run: RunView | undefined, client: QueryClient): boolean {
   const [failed, setFailed] = useState<number | null>(null);
@@ -34,9 +41,16 @@ function useRunEvents(run: RunView | undefined, client: QueryClient): boolean {
   base.current = run;
   useEffect(() => {
     if (id === null || failed === id) return;
-    if (typeof EventSource === 'undefined') return setFailed(id);
+    if (typeof EventSource === 'undefined' || openStreams >= MAX_STREAMS) return setFailed(id);
+    openStreams++;
     const es = new EventSource(`/api/runs/${id}/events`);
     let finished = false;
+    let counted = true;
+    const close = () => {
+      es.close();
+      if (counted) openStreams--;
+      counted = false;
+    };
     es.addEventListener('progress', (e) => {
       const p = JSON.parse((e as MessageEvent<string>).data) as { state: RunView['state']; progress: number };
       client.setQueryData<RunView>(['run-poll', id], (old) => {
@@ -46,12 +60,12 @@ function useRunEvents(run: RunView | undefined, client: QueryClient): boolean {
     });
     es.addEventListener('run', (e) => {
       finished = true;
-      es.close();
+      close();
       client.setQueryData<RunView>(['run-poll', id], JSON.parse((e as MessageEvent<string>).data) as RunView);
     });
     const fail = () => {
       if (finished) return;
-      es.close();
+      close();
       setFailed(id);
     };
     es.addEventListener('failure', fail);
@@ -59,7 +73,7 @@ function useRunEvents(run: RunView | undefined, client: QueryClient): boolean {
     es.onerror = fail;
     return () => {
       finished = true;
-      es.close();
+      close();
     };
   }, [id, failed, client]);
   return id !== null && failed === id;

@@ -13,7 +13,7 @@ type Ctx = { params: Promise<{ labId: string; memoId: string }> };
 /**
  * A block's result for the given settings: a cached result at once, else (for roles that
  * may compute) a new run, answered when done or after ~0.4 s with its progress; the client
- * then polls /api/runs/[runId]. Reading cached results needs memo:read only.
+ * then follows /api/runs/[runId]/events (or polls /api/runs/[runId]). Reading cached results needs memo:read only.
  */
 export const POST = route<Ctx>(async (request, { params }) => {
   assertSameOrigin(request);
