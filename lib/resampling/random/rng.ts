@@ -114,24 +114,30 @@ export class TycheI implements Rng {
     let k = 0;
     // Branch-free while both halves fit: a rejected half adds 0 to a valid cell (its index
     // x >>> 16 is below m either way), since with m = 10⁴ about 8% of halves are rejected at
-    // random and a mispredicted branch costs more than the add. Same draws, same order.
-    const last = times - 1;
-    while (k < last) {
-      b = (b << 25) ^ (b >>> 7) ^ c;
-      c = (c - d) | 0;
-      d = (d << 24) ^ (d >>> 8) ^ a;
-      a = (a - b) | 0;
-      b = (b << 20) ^ (b >>> 12) ^ c;
-      c = (c - d) | 0;
-      d = (d << 16) ^ (c >>> 16) ^ a;
-      a = (a - b) | 0;
-      const x1 = (a >>> 16) * m;
-      const x2 = (a & 0xffff) * m;
-      const g1 = accepted(x1, threshold);
-      const g2 = accepted(x2, threshold);
-      counts[x1 >>> 16] += g1;
-      counts[x2 >>> 16] += g2;
-      k += g1 + g2;
+    // random and a mispredicted branch costs more than the add. Outputs go in batches of
+    // q = ⌊(times − k)/2⌋, which can accept at most times − k draws, so the inner loop is a
+    // plain counted loop and each output in it has room for both halves — the same draws in
+    // the same order as one output at a time.
+    for (let q = times >> 1; q > 0; q = (times - k) >> 1) {
+      let got = 0;
+      for (let i = 0; i < q; i++) {
+        b = (b << 25) ^ (b >>> 7) ^ c;
+        c = (c - d) | 0;
+        d = (d << 24) ^ (d >>> 8) ^ a;
+        a = (a - b) | 0;
+        b = (b << 20) ^ (b >>> 12) ^ c;
+        c = (c - d) | 0;
+        d = (d << 16) ^ (c >>> 16) ^ a;
+        a = (a - b) | 0;
+        const x1 = (a >>> 16) * m;
+        const x2 = (a & 0xffff) * m;
+        const g1 = accepted(x1, threshold);
+        const g2 = accepted(x2, threshold);
+        counts[x1 >>> 16] += g1;
+        counts[x2 >>> 16] += g2;
+        got += g1 + g2;
+      }
+      k += got;
     }
     while (k < times) {
       b = (b << 25) ^ (b >>> 7) ^ c;
@@ -168,23 +174,26 @@ export class TycheI implements Rng {
     let d = this.d | 0;
     const threshold = (TWO16 - m) % m;
     let k = 0;
-    const last = times - 1;
-    while (k < last) {
-      b = (b << 25) ^ (b >>> 7) ^ c;
-      c = (c - d) | 0;
-      d = (d << 24) ^ (d >>> 8) ^ a;
-      a = (a - b) | 0;
-      b = (b << 20) ^ (b >>> 12) ^ c;
-      c = (c - d) | 0;
-      d = (d << 16) ^ (c >>> 16) ^ a;
-      a = (a - b) | 0;
-      const x1 = (a >>> 16) * m;
-      const x2 = (a & 0xffff) * m;
-      const g1 = accepted(x1, threshold);
-      const g2 = accepted(x2, threshold);
-      counts[units[x1 >>> 16]] += g1;
-      counts[units[x2 >>> 16]] += g2;
-      k += g1 + g2;
+    for (let q = times >> 1; q > 0; q = (times - k) >> 1) {
+      let got = 0;
+      for (let i = 0; i < q; i++) {
+        b = (b << 25) ^ (b >>> 7) ^ c;
+        c = (c - d) | 0;
+        d = (d << 24) ^ (d >>> 8) ^ a;
+        a = (a - b) | 0;
+        b = (b << 20) ^ (b >>> 12) ^ c;
+        c = (c - d) | 0;
+        d = (d << 16) ^ (c >>> 16) ^ a;
+        a = (a - b) | 0;
+        const x1 = (a >>> 16) * m;
+        const x2 = (a & 0xffff) * m;
+        const g1 = accepted(x1, threshold);
+        const g2 = accepted(x2, threshold);
+        counts[units[x1 >>> 16]] += g1;
+        counts[units[x2 >>> 16]] += g2;
+        got += g1 + g2;
+      }
+      k += got;
     }
     while (k < times) {
       b = (b << 25) ^ (b >>> 7) ^ c;
