@@ -116,10 +116,14 @@ export class TycheI implements Rng {
     // x >>> 16 is below m either way), since with m = 10⁴ about 8% of halves are rejected at
     // random and a mispredicted branch costs more than the add. Outputs go in batches of
     // q = ⌊(times − k)/2⌋, which can accept at most times − k draws, so the inner loop is a
-    // plain counted loop and each output in it has room for both halves — the same draws in
-    // the same order as one output at a time.
-    for (let q = times >> 1; q > 0; q = (times - k) >> 1) {
-      let got = 0;
+    // plain counted loop and each output in it has room for both halves; a last single index
+    // takes the first acceptable half of the next outputs (lastIndex16) — the same draws in
+    // the same order as one output at a time. (The rare last index lives in its own method so
+    // that the hot loop has no code that first runs after V8 has optimized it, which made it
+    // deoptimize on every call.)
+    for (;;) {
+      const q = (times - k) >> 1;
+      if (q === 0) break;
       for (let i = 0; i < q; i++) {
         b = (b << 25) ^ (b >>> 7) ^ c;
         c = (c - d) | 0;
@@ -135,36 +139,14 @@ export class TycheI implements Rng {
         const g2 = accepted(x2, threshold);
         counts[x1 >>> 16] += g1;
         counts[x2 >>> 16] += g2;
-        got += g1 + g2;
-      }
-      k += got;
-    }
-    while (k < times) {
-      b = (b << 25) ^ (b >>> 7) ^ c;
-      c = (c - d) | 0;
-      d = (d << 24) ^ (d >>> 8) ^ a;
-      a = (a - b) | 0;
-      b = (b << 20) ^ (b >>> 12) ^ c;
-      c = (c - d) | 0;
-      d = (d << 16) ^ (c >>> 16) ^ a;
-      a = (a - b) | 0;
-      const x1 = (a >>> 16) * m;
-      if ((x1 & 0xffff) >= threshold) {
-        counts[x1 >>> 16]++;
-        k++;
-      }
-      if (k < times) {
-        const x2 = (a & 0xffff) * m;
-        if ((x2 & 0xffff) >= threshold) {
-          counts[x2 >>> 16]++;
-          k++;
-        }
+        k += g1 + g2;
       }
     }
     this.a = a;
     this.b = b;
     this.c = c;
     this.d = d;
+    if (k < times) counts[this.lastIndex16(m, threshold)]++;
   }
 
   private addVia16(counts: Int32Array, m: number, times: number, units: Int32Array): void {
@@ -174,8 +156,9 @@ export class TycheI implements Rng {
     let d = this.d | 0;
     const threshold = (TWO16 - m) % m;
     let k = 0;
-    for (let q = times >> 1; q > 0; q = (times - k) >> 1) {
-      let got = 0;
+    for (;;) {
+      const q = (times - k) >> 1;
+      if (q === 0) break;
       for (let i = 0; i < q; i++) {
         b = (b << 25) ^ (b >>> 7) ^ c;
         c = (c - d) | 0;
@@ -191,36 +174,28 @@ export class TycheI implements Rng {
         const g2 = accepted(x2, threshold);
         counts[units[x1 >>> 16]] += g1;
         counts[units[x2 >>> 16]] += g2;
-        got += g1 + g2;
-      }
-      k += got;
-    }
-    while (k < times) {
-      b = (b << 25) ^ (b >>> 7) ^ c;
-      c = (c - d) | 0;
-      d = (d << 24) ^ (d >>> 8) ^ a;
-      a = (a - b) | 0;
-      b = (b << 20) ^ (b >>> 12) ^ c;
-      c = (c - d) | 0;
-      d = (d << 16) ^ (c >>> 16) ^ a;
-      a = (a - b) | 0;
-      const x1 = (a >>> 16) * m;
-      if ((x1 & 0xffff) >= threshold) {
-        counts[units[x1 >>> 16]]++;
-        k++;
-      }
-      if (k < times) {
-        const x2 = (a & 0xffff) * m;
-        if ((x2 & 0xffff) >= threshold) {
-          counts[units[x2 >>> 16]]++;
-          k++;
-        }
+        k += g1 + g2;
       }
     }
     this.a = a;
     this.b = b;
     this.c = c;
     this.d = d;
+    if (k < times) counts[units[this.lastIndex16(m, threshold)]]++;
+  }
+
+  /**
+   * One index when one is left in an addCounts call: the first acceptable 16-bit half of the
+   * next outputs, high half first; the other half of that output is dropped.
+   */
+  private lastIndex16(m: number, threshold: number): number {
+    for (;;) {
+      const w = this.int32();
+      const x1 = (w >>> 16) * m;
+      if ((x1 & 0xffff) >= threshold) return x1 >>> 16;
+      const x2 = (w & 0xffff) * m;
+      if ((x2 & 0xffff) >= threshold) return x2 >>> 16;
+    }
   }
 
   /** m > 2¹⁶: one index per 32-bit output (uniform-index.ts). */
