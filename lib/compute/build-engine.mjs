@@ -14,7 +14,6 @@
 //
 //   node lib/compute/build-engine.mjs            build if stale, print the bundle folder
 //   node lib/compute/build-engine.mjs --force    always rebuild
-import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync, readdirSync, readFileSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
@@ -52,14 +51,18 @@ function listSources(root) {
   return files.sort();
 }
 
-/** Signature of the sources: changes whenever a file is added, removed or modified. */
+/**
+ * Signature of the sources: one line of path, size and mtime per file, so it changes whenever
+ * a file is added, removed or modified. Kept as text (a few kilobytes) and compared whole —
+ * exact, and no hash module to load on each start of the command line.
+ */
 export function sourceSignature(root = projectRoot()) {
-  const h = createHash('sha256');
+  let text = '';
   for (const f of listSources(root)) {
     const s = statSync(path.join(root, f));
-    h.update(`${f}:${s.size}:${s.mtimeMs}\n`);
+    text += `${f}:${s.size}:${s.mtimeMs}\n`;
   }
-  return h.digest('hex');
+  return text;
 }
 
 export function bundlePaths(root = projectRoot()) {

@@ -42,7 +42,7 @@ interface Job {
 
 interface Slot {
   worker: Worker;
-  ready: Promise<void>;
+  /** The worker has started (posted 'ready'). */
   isReady: boolean;
   /** The job this worker was given and has not yet reported idle for. */
   job: Job | null;
@@ -167,14 +167,11 @@ export class EnginePool {
 
   private spawn(): Slot {
     const worker = new Worker(this.file);
-    let markReady!: () => void;
-    const slot: Slot = { worker, ready: new Promise<void>((r) => (markReady = r)), isReady: false, job: null };
+    const slot: Slot = { worker, isReady: false, job: null };
     worker.unref();
     worker.on('message', (msg: FromWorker) => {
-      if (msg.type === 'ready') {
-        slot.isReady = true;
-        markReady();
-      } else this.onMessage(slot, msg);
+      if (msg.type === 'ready') slot.isReady = true;
+      else this.onMessage(slot, msg);
     });
     worker.on('error', (err) => this.onCrash(slot, err));
     worker.on('exit', (code) => {
@@ -191,8 +188,11 @@ export class EnginePool {
       if (!job) return;
       slot.job = job;
       slot.worker.ref();
+      // Posted at once, even to a worker still starting: its port queues the message, so it
+      // starts on the job the moment it is up, without waiting for this thread's event loop
+      // (which may be busy drawing a chunk itself).
       const msg: ToWorker = { type: 'run', job: job.id, request: job.request, buffers: job.buffers };
-      void slot.ready.then(() => slot.worker.postMessage(msg));
+      slot.worker.postMessage(msg);
     }
   }
 
