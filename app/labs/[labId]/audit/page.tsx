@@ -1,12 +1,10 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { notFound, redirect } from 'next/navigation';
 import { AppShell } from '@/components/app-shell';
 import { LabNav } from '@/components/lab-nav';
 import { listLabAudit } from '@/db/queries/audit';
-import { labsForUser, membersOf, membershipOf } from '@/db/queries/labs';
-import { currentUser } from '@/lib/auth/session';
-import { can } from '@/lib/authz';
+import { membersOf } from '@/db/queries/labs';
+import { labPage } from '@/lib/labs/page-access';
 import { describeEvent } from './describe';
 
 export const dynamic = 'force-dynamic';
@@ -16,16 +14,10 @@ const PAGE = 50;
 
 /** The lab's audit trail, newest first (Owners only; others get "not found"). */
 export default async function AuditPage({ params, searchParams }: { params: Promise<{ labId: string }>; searchParams: Promise<{ before?: string }> }) {
-  const user = await currentUser();
   const { labId: raw } = await params;
-  if (!user) redirect(`/sign-in?callbackUrl=/labs/${encodeURIComponent(raw)}/audit`);
-  const labId = Number(raw);
-  if (!Number.isInteger(labId) || labId <= 0) notFound();
-  const membership = await membershipOf(user.id, labId);
-  if (!membership || !can(membership.role, 'lab:read-audit')) notFound();
+  const { user, labId, membership, labs } = await labPage(raw, `/labs/${raw}/audit`, 'lab:read-audit');
   const before = Number((await searchParams).before);
-  const [labs, events, members] = await Promise.all([
-    labsForUser(user.id),
+  const [events, members] = await Promise.all([
     listLabAudit(labId, { limit: PAGE, beforeId: Number.isInteger(before) && before > 0 ? before : undefined }),
     membersOf(labId),
   ]);

@@ -1,29 +1,22 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { notFound, redirect } from 'next/navigation';
 import { AppShell } from '@/components/app-shell';
 import { count, when } from '@/components/datasets/format';
 import { TypeBadge } from '@/components/datasets/type-badge';
 import { UploadPanel } from '@/components/datasets/upload-panel';
 import { LabNav } from '@/components/lab-nav';
-import { labsForUser, membershipOf } from '@/db/queries/labs';
-import { currentUser } from '@/lib/auth/session';
 import { can } from '@/lib/authz';
 import { listDatasets } from '@/lib/datasets';
+import { labPage } from '@/lib/labs/page-access';
 
 export const dynamic = 'force-dynamic';
 export const metadata: Metadata = { title: 'Datasets' };
 
 /** The lab's datasets, newest version of each; Authors and Owners can add one here. */
 export default async function DatasetsPage({ params }: { params: Promise<{ labId: string }> }) {
-  const user = await currentUser();
   const { labId: raw } = await params;
-  if (!user) redirect(`/sign-in?callbackUrl=/labs/${encodeURIComponent(raw)}/datasets`);
-  const labId = Number(raw);
-  if (!Number.isInteger(labId) || labId <= 0) notFound();
-  const membership = await membershipOf(user.id, labId);
-  if (!membership || !can(membership.role, 'dataset:read')) notFound();
-  const [labs, datasets] = await Promise.all([labsForUser(user.id), listDatasets(labId)]);
+  const { user, labId, membership, labs } = await labPage(raw, `/labs/${raw}/datasets`, 'dataset:read');
+  const datasets = await listDatasets(labId);
   // What shows is cosmetic; the upload route authorizes dataset:write again.
   const writes = can(membership.role, 'dataset:write');
 

@@ -1,12 +1,10 @@
 import type { Metadata } from 'next';
-import { notFound, redirect } from 'next/navigation';
 import { AppShell } from '@/components/app-shell';
-import { LabNav } from '@/components/lab-nav';
+import { LabHeader } from '@/components/lab-header';
 import { pendingInvitations } from '@/db/queries/invitations';
-import { labsForUser, membersOf, membershipOf } from '@/db/queries/labs';
-import { currentUser } from '@/lib/auth/session';
+import { membersOf } from '@/db/queries/labs';
 import { can } from '@/lib/authz';
-import { ROLE_LABEL } from '@/lib/labs/schema';
+import { labPage } from '@/lib/labs/page-access';
 import { InviteForm, LeaveLab, MemberRow, PendingInvitation, RenameLabForm } from './members-panel';
 
 export const dynamic = 'force-dynamic';
@@ -14,30 +12,16 @@ export const metadata: Metadata = { title: 'Members' };
 
 /** Who is in the lab and with which role. Owners also manage members and invitations here. */
 export default async function MembersPage({ params }: { params: Promise<{ labId: string }> }) {
-  const user = await currentUser();
   const { labId: raw } = await params;
-  if (!user) redirect(`/sign-in?callbackUrl=/labs/${encodeURIComponent(raw)}/members`);
-  const labId = Number(raw);
-  if (!Number.isInteger(labId) || labId <= 0) notFound();
-  const membership = await membershipOf(user.id, labId);
-  if (!membership) notFound();
+  const { user, labId, membership, labs } = await labPage(raw, `/labs/${raw}/members`);
   // What shows is cosmetic; every change is authorized again by the route it calls.
   const manages = can(membership.role, 'lab:manage-members');
-  const [labs, members, invitations] = await Promise.all([labsForUser(user.id), membersOf(labId), manages ? pendingInvitations(labId, new Date()) : Promise.resolve([])]);
+  const [members, invitations] = await Promise.all([membersOf(labId), manages ? pendingInvitations(labId, new Date()) : Promise.resolve([])]);
   const owners = members.filter((m) => m.role === 'owner').length;
 
   return (
     <AppShell user={user} labs={labs} currentLabId={labId}>
-      <div className="flex items-baseline justify-between gap-4">
-        <div>
-          <p className="text-sm tracking-wide text-ink-faint uppercase">Lab</p>
-          <h1 className="text-3xl font-semibold">{membership.labName}</h1>
-        </div>
-        <p className="text-sm text-ink-soft">
-          You are <strong className="font-medium text-ink">{ROLE_LABEL[membership.role]}</strong> here
-        </p>
-      </div>
-      <LabNav labId={labId} role={membership.role} current="members" />
+      <LabHeader labId={labId} labName={membership.labName} role={membership.role} current="members" />
 
       <div className="mt-8 grid gap-8 md:grid-cols-[2fr_1fr]">
         <section aria-labelledby="members-heading" className="rounded-lg border border-paper-edge bg-white/60 p-6">

@@ -1,11 +1,9 @@
 import type { Metadata } from 'next';
-import { notFound, redirect } from 'next/navigation';
 import { AppShell } from '@/components/app-shell';
 import { MemoList } from '@/components/editor/memo-list';
 import { LabNav } from '@/components/lab-nav';
-import { labsForUser, membershipOf } from '@/db/queries/labs';
-import { currentUser } from '@/lib/auth/session';
 import { can } from '@/lib/authz';
+import { labPage } from '@/lib/labs/page-access';
 import { searchMemos } from '@/lib/memos';
 
 export const dynamic = 'force-dynamic';
@@ -13,14 +11,9 @@ export const metadata: Metadata = { title: 'Memos' };
 
 /** The lab's memos, searchable by title and text. */
 export default async function MemosPage({ params }: { params: Promise<{ labId: string }> }) {
-  const user = await currentUser();
   const { labId: raw } = await params;
-  if (!user) redirect(`/sign-in?callbackUrl=/labs/${encodeURIComponent(raw)}/memos`);
-  const labId = Number(raw);
-  if (!Number.isInteger(labId) || labId <= 0) notFound();
-  const membership = await membershipOf(user.id, labId);
-  if (!membership) notFound();
-  const [labs, memos] = await Promise.all([labsForUser(user.id), searchMemos(labId, undefined)]);
+  const { user, labId, membership, labs } = await labPage(raw, `/labs/${raw}/memos`, 'memo:read');
+  const memos = await searchMemos(labId, undefined);
   return (
     <AppShell user={user} labs={labs} currentLabId={labId}>
       <p className="text-sm tracking-wide text-ink-faint uppercase">Lab</p>

@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { notFound, redirect } from 'next/navigation';
+import { notFound } from 'next/navigation';
 import { AppShell } from '@/components/app-shell';
 import { ColumnSummaries } from '@/components/datasets/column-summaries';
 import { DataGrid } from '@/components/datasets/data-grid';
@@ -8,26 +8,21 @@ import { bytes, count, when } from '@/components/datasets/format';
 import { UploadPanel } from '@/components/datasets/upload-panel';
 import { VersionHistory } from '@/components/datasets/version-history';
 import { LabNav } from '@/components/lab-nav';
-import { labsForUser, membershipOf } from '@/db/queries/labs';
-import { currentUser } from '@/lib/auth/session';
 import { can } from '@/lib/authz';
 import { datasetWithVersions, versionOfDataset } from '@/lib/datasets';
 import { DELIMITER_LABEL } from '@/lib/datasets/options';
 import { AppError } from '@/lib/errors';
+import { idParam, labPage } from '@/lib/labs/page-access';
 
 export const dynamic = 'force-dynamic';
 export const metadata: Metadata = { title: 'Dataset' };
 
 /** One dataset: the chosen version (?v=N, else the newest) as a scrolling table, its column summaries and the version history. */
 export default async function DatasetPage({ params, searchParams }: { params: Promise<{ labId: string; datasetId: string }>; searchParams: Promise<{ v?: string }> }) {
-  const user = await currentUser();
   const { labId: rawLab, datasetId: rawDataset } = await params;
-  if (!user) redirect(`/sign-in?callbackUrl=/labs/${encodeURIComponent(rawLab)}/datasets/${encodeURIComponent(rawDataset)}`);
-  const labId = Number(rawLab);
-  const datasetId = Number(rawDataset);
-  if (![labId, datasetId].every((n) => Number.isInteger(n) && n > 0)) notFound();
-  const membership = await membershipOf(user.id, labId);
-  if (!membership || !can(membership.role, 'dataset:read')) notFound();
+  const { user, labId, membership, labs } = await labPage(rawLab, `/labs/${rawLab}/datasets/${rawDataset}`, 'dataset:read');
+  const datasetId = idParam(rawDataset);
+  if (!datasetId) notFound();
 
   let found;
   try {
@@ -39,7 +34,7 @@ export default async function DatasetPage({ params, searchParams }: { params: Pr
   const { dataset, versions } = found;
   const asked = Number((await searchParams).v);
   const number = Number.isInteger(asked) && versions.some((v) => v.version === asked) ? asked : dataset.latestVersion;
-  const [labs, version] = await Promise.all([labsForUser(user.id), versionOfDataset(labId, datasetId, number)]);
+  const version = await versionOfDataset(labId, datasetId, number);
   const writes = can(membership.role, 'dataset:write');
   const src = version.source;
 

@@ -1,13 +1,14 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { notFound, redirect } from 'next/navigation';
+import { notFound } from 'next/navigation';
 import { AppShell } from '@/components/app-shell';
 import { MemoEditor } from '@/components/editor/memo-editor';
 import { LabNav } from '@/components/lab-nav';
 import { findMemo } from '@/db/queries/memos';
-import { labsForUser, membershipOf } from '@/db/queries/labs';
+import { membershipOf } from '@/db/queries/labs';
 import { currentUser } from '@/lib/auth/session';
 import { can } from '@/lib/authz';
+import { idParam, labPage } from '@/lib/labs/page-access';
 import { pickerDatasets } from '@/lib/memos/picker';
 import { memoResults } from '@/lib/memos/results';
 
@@ -26,19 +27,15 @@ export async function generateMetadata({ params }: { params: Promise<{ labId: st
  * with the page; missing ones start computing), then hands over to the client editor.
  */
 export default async function MemoPage({ params }: { params: Promise<{ labId: string; memoId: string }> }) {
-  const user = await currentUser();
   const raw = await params;
-  if (!user) redirect(`/sign-in?callbackUrl=/labs/${encodeURIComponent(raw.labId)}/memos/${encodeURIComponent(raw.memoId)}`);
-  const labId = Number(raw.labId);
-  const memoId = Number(raw.memoId);
-  if (!Number.isInteger(labId) || labId <= 0 || !Number.isInteger(memoId) || memoId <= 0) notFound();
-  const membership = await membershipOf(user.id, labId);
-  if (!membership) notFound();
+  const { user, labId, membership, labs } = await labPage(raw.labId, `/labs/${raw.labId}/memos/${raw.memoId}`, 'memo:read');
+  const memoId = idParam(raw.memoId);
+  if (!memoId) notFound();
   const memo = await findMemo(memoId);
   if (!memo || memo.labId !== labId) notFound();
   const canWrite = can(membership.role, 'memo:write');
   const canCompute = can(membership.role, 'run:compute');
-  const [labs, datasets, initial] = await Promise.all([labsForUser(user.id), pickerDatasets(labId), memoResults({ labId, memoId, doc: memo.doc, userId: user.id, canCompute })]);
+  const [datasets, initial] = await Promise.all([pickerDatasets(labId), memoResults({ labId, memoId, doc: memo.doc, userId: user.id, canCompute })]);
 
   return (
     <AppShell user={user} labs={labs} currentLabId={labId}>
