@@ -1,6 +1,7 @@
 import 'server-only';
 import { chunkCount, chunkRange, drawAll, type EngineResponse, EngineError, finalize, parseRequest, prepareProblem, type Problem } from '@/lib/resampling';
 import { needsInnerSe, runChunkInto } from '@/lib/resampling/replicates/run-chunk';
+import { dataDigest } from './data-digest';
 import type { Drawn } from './pool';
 import { defaultWorkers, INLINE_DRAWS, poolFor } from './shared-pool';
 import { workerFile } from './worker-file';
@@ -37,6 +38,7 @@ export async function compute(input: unknown, opts: ComputeOptions = {}): Promis
   if (signal?.aborted) throw abortReason(signal);
   const threads = opts.threads ?? (drawsOf(problem) < INLINE_DRAWS ? 0 : defaultWorkers(opts.callerDraws === true));
   let drawn: Drawn;
+  let digest: string | undefined;
   if (threads === 0) {
     try {
       drawn = drawAll(problem, { onProgress: opts.onProgress, shouldStop: () => signal?.aborted === true });
@@ -45,10 +47,14 @@ export async function compute(input: unknown, opts: ComputeOptions = {}): Promis
       throw e;
     }
   } else {
-    drawn = await drawInWorkers(problem, threads, opts);
+    const pending = drawInWorkers(problem, threads, opts);
+    // Hashed while the workers draw (this thread's chunks wait for it), not after the draws
+    // when this thread alone is working.
+    digest = dataDigest(request.data);
+    drawn = await pending;
   }
   if (signal?.aborted) throw abortReason(signal);
-  return finalize(problem, drawn.theta, drawn.innerSe, () => signal?.aborted === true);
+  return finalize(problem, drawn.theta, drawn.innerSe, () => signal?.aborted === true, digest ?? dataDigest(request.data));
 }
 
 async function drawInWorkers(problem: Problem, threads: number, opts: ComputeOptions): Promise<Drawn> {

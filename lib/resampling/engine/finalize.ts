@@ -30,8 +30,12 @@ const IQR_NORMAL = 1.3489795003921634; // 2·Φ⁻¹(0.75)
  * Everything after the replicates: SE, bias, Monte Carlo errors, intervals, jackknife,
  * exact answer, convergence, diagnostics, provenance. Deterministic: the same replicates
  * give the same response, whichever threads drew them.
+ *
+ * `dataDigest`, when given, is the caller's SHA-256 of canonicalJson(request.data) as lowercase
+ * hex (a Node caller computes it with node:crypto, several times faster than the engine's
+ * pure-JS hash); otherwise the engine hashes the data itself. Both give the same digest.
  */
-export function finalize(problem: Problem, theta: Float64Array, innerSe: Float64Array | null, shouldStop?: () => boolean): EngineResponse {
+export function finalize(problem: Problem, theta: Float64Array, innerSe: Float64Array | null, shouldStop?: () => boolean, dataDigest?: string): EngineResponse {
   const req = problem.request;
   const B = req.B;
   const estimate = problem.statistic.estimate;
@@ -147,7 +151,7 @@ export function finalize(problem: Problem, theta: Float64Array, innerSe: Float64
       engine: ENGINE_VERSION,
       rng: `${RNG_NAME}; replicates in chunks of ${CHUNK_SIZE}, chunk k seeded with seed + "\\u001fchunk:k"; indices by Lemire's unbiased multiply-and-reject`,
       seed: req.seed,
-      dataSha256: dataSha256(req.data),
+      dataSha256: dataDigest ?? dataSha256(req.data),
       statistic: problem.description,
       scheme: problem.scheme.description,
       n: problem.n,
