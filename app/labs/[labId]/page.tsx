@@ -20,7 +20,7 @@ export default async function LabHome({ params }: { params: Promise<{ labId: str
     <AppShell user={user} labs={labs} currentLabId={labId}>
       <LabHeader labId={labId} labName={membership.labName} role={membership.role} current="memos" />
 
-      <div className="mt-8 grid gap-8 md:grid-cols-[2fr_1fr]">
+      <div className="mt-8 grid gap-8 md:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
         <LabMemosCard labId={labId} canWrite={can(membership.role, 'memo:write')} />
         <aside className="space-y-6">
           <section aria-labelledby="members-heading" className="rounded-lg border border-paper-edge bg-white/60 p-6">

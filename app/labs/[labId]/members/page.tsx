@@ -23,7 +23,7 @@ export default async function MembersPage({ params }: { params: Promise<{ labId:
     <AppShell user={user} labs={labs} currentLabId={labId}>
       <LabHeader labId={labId} labName={membership.labName} role={membership.role} current="members" />
 
-      <div className="mt-8 grid gap-8 md:grid-cols-[2fr_1fr]">
+      <div className="mt-8 grid gap-8 md:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
         <section aria-labelledby="members-heading" className="rounded-lg border border-paper-edge bg-white/60 p-6">
           <h2 id="members-heading" className="text-xl font-semibold">
             Members <span className="text-base font-normal text-ink-faint">({members.length})</span>
