@@ -135,6 +135,20 @@ describe('command line', () => {
     expect(fromStdin.stdout.trim()).toBe(expected);
   }, 120_000);
 
+  it('a large request, whose job reaches the workers before this thread has prepared it: same response, or the same error', async () => {
+    const file = path.join(tmpdir(), `margin-cli-stud-${process.pid}.json`);
+    const stud = { ...big, B: 1000, intervals: { methods: ['percentile', 'studentized'], studentized: { se: 'bootstrap', innerB: 25 } }, data: { nitrate: daily.slice(0, 2500) } };
+    writeFileSync(file, JSON.stringify(stud));
+    const out = await cli([file]);
+    expect(out.code).toBe(0);
+    expect(out.stdout.trim()).toBe(JSON.stringify(runRequest(stud)));
+    const badFile = path.join(tmpdir(), `margin-cli-bad-${process.pid}.json`);
+    writeFileSync(badFile, JSON.stringify({ ...big, statistic: { name: 'median', column: 'nope' } }));
+    const bad = await cli([badFile]);
+    expect(bad.code).toBe(1);
+    expect(JSON.parse(bad.stdout).error).toMatchObject({ code: 'invalid:request', path: 'statistic.column' });
+  }, 120_000);
+
   it('exits non-zero with a JSON error on bad input', async () => {
     const bad = await cli(['-'], '{"data": {"x": [1, 2, "three"]}, "statistic": {"name": "mean", "column": "x"}}');
     expect(bad.code).toBe(1);

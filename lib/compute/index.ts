@@ -3,7 +3,7 @@ import { chunkCount, chunkRange, drawAll, type EngineResponse, EngineError, fina
 import { needsInnerSe, runChunkInto } from '@/lib/resampling/replicates/run-chunk';
 import { dataDigest } from './data-digest';
 import type { Drawn } from './pool';
-import { defaultWorkers, INLINE_DRAWS, poolFor } from './shared-pool';
+import { defaultWorkers, INLINE_DRAWS, poolFor, warmPoolFor } from './shared-pool';
 import { workerFile } from './worker-file';
 
 export { closeComputePool, defaultWorkers, INLINE_DRAWS, looksLarge, prewarmCompute } from './shared-pool';
@@ -33,13 +33,38 @@ export interface ComputeOptions {
  */
 export async function compute(input: unknown, opts: ComputeOptions = {}): Promise<EngineResponse> {
   const request = parseRequest(input);
-  const problem = prepareProblem(request);
   const signal = opts.signal;
+  // Workers already started for this request (the command line starts them when the request
+  // looks large): post the job to them now, so that they prepare the problem while this
+  // thread prepares its own copy, instead of waiting idle for it.
+  const early = !signal && opts.callerDraws === true && opts.threads === undefined ? warmPoolFor(defaultWorkers(true)) : null;
+  let earlyJob: { drawn: Promise<Drawn>; setInline: (f: InlineDraw | null) => void } | null = null;
+  if (early) {
+    let setInline!: (f: InlineDraw | null) => void;
+    const inlineLater = new Promise<InlineDraw | null>((resolve) => (setInline = resolve));
+    const drawnEarly = early.run(request, chunkSizes(request.B), request.intervals.methods.includes('studentized'), { onProgress: opts.onProgress, inlineLater, callerDraws: 'always' });
+    drawnEarly.catch(() => {});
+    earlyJob = { drawn: drawnEarly, setInline };
+  }
+  let problem: Problem;
+  try {
+    problem = prepareProblem(request);
+  } catch (e) {
+    earlyJob?.setInline(null);
+    throw e;
+  }
   if (signal?.aborted) throw abortReason(signal);
-  const threads = opts.threads ?? (drawsOf(problem) < INLINE_DRAWS ? 0 : defaultWorkers(opts.callerDraws === true));
+  const threads = earlyJob ? -1 : (opts.threads ?? (drawsOf(problem) < INLINE_DRAWS ? 0 : defaultWorkers(opts.callerDraws === true)));
   let drawn: Drawn;
   let digest: string | undefined;
-  if (threads === 0) {
+  if (earlyJob) {
+    earlyJob.setInline((k, theta, innerSe) => runChunkInto(problem, k, theta, innerSe));
+    digest = dataDigest(request.data);
+    const d = await earlyJob.drawn;
+    // The inner-SE array was made whenever the studentized interval was asked for; a scheme
+    // without one leaves it unused, as runRequest does.
+    drawn = { theta: d.theta, innerSe: needsInnerSe(problem) ? d.innerSe : null };
+  } else if (threads === 0) {
     try {
       drawn = drawAll(problem, { onProgress: opts.onProgress, shouldStop: () => signal?.aborted === true });
     } catch (e) {
@@ -60,16 +85,20 @@ export async function compute(input: unknown, opts: ComputeOptions = {}): Promis
 async function drawInWorkers(problem: Problem, threads: number, opts: ComputeOptions): Promise<Drawn> {
   const file = await workerFile();
   const pool = poolFor(file, threads);
-  const B = problem.request.B;
-  const sizes = Array.from({ length: chunkCount(B) }, (_, k) => {
-    const [a, b] = chunkRange(B, k);
-    return b - a;
-  });
-  return pool.run(problem.request, sizes, needsInnerSe(problem), {
+  return pool.run(problem.request, chunkSizes(problem.request.B), needsInnerSe(problem), {
     signal: opts.signal,
     onProgress: opts.onProgress,
     inline: (k, theta, innerSe) => runChunkInto(problem, k, theta, innerSe),
     callerDraws: opts.callerDraws ? 'always' : 'while-starting',
+  });
+}
+
+type InlineDraw = (k: number, theta: Float64Array, innerSe: Float64Array | null) => void;
+
+function chunkSizes(B: number): number[] {
+  return Array.from({ length: chunkCount(B) }, (_, k) => {
+    const [a, b] = chunkRange(B, k);
+    return b - a;
   });
 }
 

@@ -21,6 +21,12 @@ export interface RunOptions {
    * (a server: only until the first worker is up, so its event loop is soon free again).
    */
   callerDraws?: 'always' | 'while-starting';
+  /**
+   * Instead of inline: the calling thread's draw function once it is known. The job can then
+   * be posted to the workers before the caller has prepared its own copy of the problem, so
+   * the workers prepare theirs at the same time. Null: the caller does not draw.
+   */
+  inlineLater?: Promise<RunOptions['inline'] | null>;
 }
 
 interface Job {
@@ -114,6 +120,14 @@ export class EnginePool {
       this.ensureSlots();
       this.dispatch();
       if (opts.inline) void this.drawOnCaller(job, opts.inline, opts.callerDraws ?? 'while-starting');
+      else if (opts.inlineLater) {
+        void opts.inlineLater.then(
+          (inline) => {
+            if (inline) void this.drawOnCaller(job, inline, opts.callerDraws ?? 'while-starting');
+          },
+          () => {},
+        );
+      }
     });
   }
 

@@ -48,6 +48,11 @@ export function prewarmCompute(threads: number): void {
   if (file && threads > 0) poolFor(file, threads).warm();
 }
 
+/** The pool, if prewarmCompute started it with this many workers; else null. */
+export function warmPoolFor(threads: number): EnginePool | null {
+  return pool && pool.size === threads && poolFile === process.env.MARGIN_ENGINE_WORKER ? pool : null;
+}
+
 /**
  * A cheap guess, before validation, whether a request will go to worker threads: B times
  * the longest data column against INLINE_DRAWS. Only decides whether to start workers
