@@ -55,7 +55,7 @@ describe('memo with live blocks', () => {
     await current(page, 'demo-median');
     const seRow = () => block(page, 'demo-median').locator('td[data-output="Standard error"]').innerText();
     const seBefore = await seRow();
-    const b = block(page, 'demo-median').getByLabel('Replicates B');
+    const b = block(page, 'demo-median').getByLabel('Replicates B', { exact: true });
     await b.fill('3000');
     await page.locator('section[data-block-id="demo-median"] p', { hasText: 'B = 3000' }).first().waitFor({ timeout: 30_000 });
     await current(page, 'demo-median');
@@ -166,7 +166,7 @@ describe('memo with live blocks', () => {
     await page.getByRole('link', { name: 'Nitrate below the treatment works' }).click();
     await current(page, 'demo-median');
     expect(await page.getByRole('button', { name: 'Insert block' }).count()).toBe(0);
-    expect(await block(page, 'demo-median').getByLabel('Replicates B').isDisabled()).toBe(true);
+    expect(await block(page, 'demo-median').getByLabel('Replicates B', { exact: true }).isDisabled()).toBe(true);
     await screenshot(page, 'memo-reader');
     await context.close();
   });

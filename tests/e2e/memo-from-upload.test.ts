@@ -95,7 +95,7 @@ describe('an Author builds a memo from an uploaded CSV', () => {
 
     // Another: B. The Convergence plot now runs to B = 3000 and the SE is recomputed.
     const seBefore = await memo.resultCell(est, 'Estimate results', 'Standard error').innerText();
-    await est.getByLabel('Replicates B').fill('3000');
+    await est.getByLabel('Replicates B', { exact: true }).fill('3000');
     await expect.poll(() => memo.block('convergence-plot').innerText(), { timeout: 30_000 }).toMatch(/At B = 3000:/);
     await memo.current('estimate');
     expect(await memo.resultCell(est, 'Estimate results', 'Standard error').innerText()).not.toBe(seBefore);

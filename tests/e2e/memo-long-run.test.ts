@@ -25,7 +25,7 @@ describe('a long run in the browser', () => {
     await memo.insert('Estimate');
     const est = memo.block('estimate');
     await est.getByLabel('Dataset', { exact: true }).selectOption({ label: name });
-    await est.getByLabel('BCa').uncheck();
+    await est.getByRole('checkbox', { name: 'BCa', exact: true }).uncheck();
     await memo.current('estimate');
 
     const runRequests: string[] = [];
@@ -33,7 +33,7 @@ describe('a long run in the browser', () => {
       const p = new URL(r.url()).pathname;
       if (/^\/api\/runs\/\d+(\/events)?$/.test(p)) runRequests.push(p);
     });
-    await est.getByLabel('Replicates B').fill('100000');
+    await est.getByLabel('Replicates B', { exact: true }).fill('100000');
     const bar = est.getByRole('progressbar', { name: 'Computing progress' }).or(est.getByLabel('Computing progress'));
     await bar.waitFor({ timeout: 30_000 });
     await expect.poll(async () => Number(await bar.getAttribute('value')), { timeout: 30_000 }).toBeGreaterThan(0);
@@ -47,7 +47,7 @@ describe('a long run in the browser', () => {
     expect(await est.getAttribute('data-run-state')).toBe('failed');
     await screenshot(page, 'memo-long-run-cancelled');
 
-    await est.getByLabel('Replicates B').fill('3000');
+    await est.getByLabel('Replicates B', { exact: true }).fill('3000');
     await memo.current('estimate');
     expect(await est.innerText()).toMatch(/B = 3000/);
     await context.close();
