@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
-import seedrandom from 'seedrandom';
 import { describe, expect, it } from 'vitest';
+import { ar1Series } from '@/tests/support/ar1';
 import { ar1OptimalBlockLength } from '@/lib/resampling/blocklength';
 import { STATISTICS } from '@/lib/resampling/statistics/registry';
 import { addMovingBlockCountsFromStarts, blockCount } from '@/lib/resampling/structured';
@@ -89,18 +89,7 @@ describe('identical resamples: tsboot\'s own block starts replayed in the engine
   });
 });
 
-/** AR(1) x_t = φ x_{t−1} + e_t, e_t ~ N(0, 1) by Box–Muller on a seeded source. */
-function ar1(n: number, phi: number, seed: string): number[] {
-  const rng = seedrandom(seed);
-  const x: number[] = [];
-  let prev = 0;
-  for (let t = -200; t < n; t++) {
-    const z = Math.sqrt(-2 * Math.log(1 - rng())) * Math.cos(2 * Math.PI * rng());
-    prev = phi * prev + z;
-    if (t >= 0) x.push(prev);
-  }
-  return x;
-}
+const ar1 = (n: number, phi: number, seed: string): number[] => Array.from(ar1Series(n, phi, seed));
 
 describe('AR(1) with φ = 0.6: block schemes recover the long-run SE, the ordinary bootstrap does not', () => {
   // Closed form: for an AR(1) with marginal SD σ = σ_e/√(1 − φ²), the SE of the mean is

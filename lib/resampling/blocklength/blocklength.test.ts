@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
-import seedrandom from 'seedrandom';
 import { describe, expect, it } from 'vitest';
+import { ar1Series as ar1 } from '@/tests/support/ar1';
 import { runRNumbers } from '@/tests/reference/structured-r';
 import {
   ar1OptimalBlockLength,
@@ -10,18 +10,6 @@ import {
   optimalBlockLength,
 } from './index';
 
-/** AR(1) x_t = φ x_{t−1} + e_t, N(0,1) innovations by Box–Muller on a seeded source, 200 burn-in. */
-function ar1(n: number, phi: number, seed: string): Float64Array {
-  const rng = seedrandom(seed);
-  const x = new Float64Array(n);
-  let prev = 0;
-  for (let t = -200; t < n; t++) {
-    const z = Math.sqrt(-2 * Math.log(1 - rng())) * Math.cos(2 * Math.PI * rng());
-    prev = phi * prev + z;
-    if (t >= 0) x[t] = prev;
-  }
-  return x;
-}
 
 describe('flatTopLagWindow (Politis & Romano 1995)', () => {
   it('is 1 up to 1/2, falls linearly to 0 at 1, and is even', () => {

@@ -1,5 +1,5 @@
-import seedrandom from 'seedrandom';
 import { describe, expect, it } from 'vitest';
+import { ar1Series as ar1 } from '@/tests/support/ar1';
 import { runRNumbers } from '@/tests/reference/structured-r';
 import { autocovariance, lag1Autocorrelation, repeatedIds, serialDependence } from './index';
 
@@ -13,18 +13,6 @@ const fromR = runRNumbers(
   ).join('\n'),
 );
 
-/** AR(1) x_t = φ x_{t−1} + e_t with N(0,1) innovations (Box–Muller on a seeded source). */
-function ar1(n: number, phi: number, seed: string): Float64Array {
-  const rng = seedrandom(seed);
-  const x = new Float64Array(n);
-  let prev = 0;
-  for (let t = -200; t < n; t++) {
-    const z = Math.sqrt(-2 * Math.log(1 - rng())) * Math.cos(2 * Math.PI * rng());
-    prev = phi * prev + z;
-    if (t >= 0) x[t] = prev;
-  }
-  return x;
-}
 
 describe('autocovariance', () => {
   it.each(SERIES)('matches R acf(%s, type = "covariance") up to lag 10', (s) => {
