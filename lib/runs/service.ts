@@ -165,9 +165,12 @@ function retryable(error: RunError | null): boolean {
 
 /** A run with its result; a queued/running run that no job in this process owns (the server restarted) is marked failed. */
 export async function getRunView(runId: number): Promise<(RunView & { labId: number; memoId: number }) | undefined> {
+  // The job is looked up before the row is read: a job leaves this process only after its
+  // final state is written (settle, cancelRun), so "no job" here means the row read below is
+  // final or truly orphaned — never a run whose cancel or result is still being written.
+  const job = jobOfRun(runId);
   let run = await findRun(runId);
   if (!run) return undefined;
-  const job = jobOfRun(runId);
   if ((run.state === 'queued' || run.state === 'running') && !job) {
     const error = { code: 'interrupted:run', message: 'The run was interrupted (the server restarted). It starts again when the block asks.', path: '' };
     await updateRuns([runId], { state: 'failed', error, finishedAt: new Date() });
@@ -201,8 +204,9 @@ export async function cancelRun(runId: number): Promise<RunView> {
   const run = await findRun(runId);
   if (!run) throw new AppError('not_found:run', 'No such run.');
   if (run.state === 'queued' || run.state === 'running') {
-    detachRun(runId);
+    // Written before the job lets go of the run, so a reader never sees it running without a job.
     await updateRuns([runId], { state: 'failed', error: { code: 'cancelled:run', message: 'The run was cancelled.', path: '' }, finishedAt: new Date() });
+    detachRun(runId);
   }
   return (await getRunView(runId))!;
 }
