@@ -5,6 +5,7 @@ import path from 'node:path';
 import { promisify } from 'node:util';
 import { afterAll, describe, expect, it } from 'vitest';
 import { EngineError, runRequest } from '@/lib/resampling';
+import { everyStatistic } from '@/tests/support/statistics';
 import { closeComputePool, compute } from './index';
 
 const run = promisify(execFile);
@@ -52,25 +53,7 @@ describe('compute() in worker threads', () => {
     const site = x.map((_, i) => `S${i % 12}`);
     const side = x.map((_, i) => (i % 3 ? 'downstream' : 'upstream'));
     const data = { x, y, site, side, day: x.map((_, i) => i) };
-    const two = { column: 'x', group: 'side', levels: ['downstream', 'upstream'] };
-    const statistics = [
-      { name: 'mean', column: 'x' },
-      { name: 'median', column: 'x' },
-      { name: 'trimmed-mean', column: 'x', trim: 0.2 },
-      { name: 'quantile', column: 'x', p: 0.9 },
-      { name: 'variance', column: 'x' },
-      { name: 'sd', column: 'x' },
-      { name: 'mad', column: 'x' },
-      { name: 'iqr', column: 'x' },
-      { name: 'geometric-mean', column: 'x' },
-      { name: 'cv', column: 'x' },
-      { name: 'correlation', x: 'x', y: 'y', method: 'spearman' },
-      { name: 'ratio-of-means', numerator: 'y', denominator: 'x' },
-      { name: 'mean-difference', ...two },
-      { name: 'median-difference', ...two },
-      { name: 'regression-slope', x: 'day', y: 'x' },
-      { name: 'regression-intercept', x: 'day', y: 'x' },
-    ];
+    const statistics = everyStatistic({ x: 'x', y: 'y', group: 'side', levels: ['downstream', 'upstream'], regression: { x: 'day', y: 'x' }, p: 0.9, pearson: false });
     const schemes: [object, object][] = [
       [{ name: 'stratified', by: 'site' }, { name: 'median', column: 'x' }],
       [{ name: 'cluster', by: 'site' }, { name: 'mean', column: 'x' }],

@@ -2,8 +2,9 @@
 // keyed by (data version hash, settings, engine version), reused across blocks, recomputed
 // when data or settings change, and states move queued/running → current, current → stale.
 import { median } from 'simple-statistics';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { useTestDatabase } from '../support/database';
+import { closeComputePoolAfterAll, medianSettings, seedRunLab } from '../support/runs';
 
 useTestDatabase();
 
@@ -25,17 +26,7 @@ async function until(runId: number, done = (s: string) => s !== 'queued' && s !=
   throw new Error('run did not finish');
 }
 
-const settings = (patch: Record<string, unknown> = {}) => ({
-  dataset: { datasetId, versionId: null },
-  filter: null,
-  statistic: { name: 'median', column: 'nitrate' },
-  scheme: { name: 'ordinary' },
-  B: 1000,
-  seed: 'integration',
-  level: 0.95,
-  methods: ['percentile', 'bca'],
-  ...patch,
-});
+const settings = (patch: Record<string, unknown> = {}) => medianSettings(datasetId, { B: 1000, seed: 'integration', methods: ['percentile', 'bca'] }, patch);
 
 async function resultCount() {
   const { getPool } = await import('@/db/client');
@@ -44,27 +35,20 @@ async function resultCount() {
 }
 
 beforeAll(async () => {
-  svc = await import('@/lib/runs/service');
-  const { insertUser } = await import('@/db/queries/users');
-  const { createLab } = await import('@/db/queries/labs');
-  const { storeTable } = await import('@/lib/datasets/store');
-  const { tableFromRows } = await import('@/lib/datasets');
-  const { createMemo } = await import('@/lib/memos');
-  userId = await insertUser({ email: 'runs@example.org', name: 'Runner', passwordHash: 'x' });
-  labId = await createLab('Runs lab', userId);
-  otherLabId = await createLab('Other lab', userId);
   // Invented nitrate readings (mg/L): a skewed sample of 30.
   values = Array.from({ length: 30 }, (_, i) => Number((1.5 + ((i * 7919) % 31) / 10 + (i % 5 === 0 ? 2.5 : 0)).toFixed(2)));
   const rows = values.map((v, i) => [i % 2 ? 'upstream' : 'downstream', v]);
-  const stored = await storeTable({ newDataset: { labId, name: 'Nitrate' } }, tableFromRows(['site', 'nitrate'], rows), { kind: 'seed' }, userId);
-  datasetId = stored.datasetId;
-  memoId = await createMemo(labId, userId, 'Runs memo');
+  ({ svc, userId, labId, datasetId, memoId } = await seedRunLab({
+    user: { email: 'runs@example.org', name: 'Runner' },
+    lab: 'Runs lab',
+    dataset: { name: 'Nitrate', columns: ['site', 'nitrate'], rows },
+    memo: 'Runs memo',
+  }));
+  const { createLab } = await import('@/db/queries/labs');
+  otherLabId = await createLab('Other lab', userId);
 });
 
-afterAll(async () => {
-  const { closeComputePool } = await import('@/lib/compute');
-  await closeComputePool();
-});
+closeComputePoolAfterAll();
 
 describe('runs: caching and invalidation', () => {
   let first: Awaited<ReturnType<Svc['requestRun']>>;

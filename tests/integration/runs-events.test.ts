@@ -3,8 +3,9 @@
 // the finished run with its result; a finished run answered at once; a cancelled run's stream
 // ending with its cancelled state. The median is checked against simple-statistics.
 import { median } from 'simple-statistics';
-import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { beforeAll, describe, expect, it, vi } from 'vitest';
 import { useTestDatabase } from '../support/database';
+import { closeComputePoolAfterAll, medianSettings, seedRunLab } from '../support/runs';
 
 const session = vi.hoisted(() => ({ claims: null as null | { userId: number; sessionVersion: number } }));
 vi.mock('@/lib/auth/session-source', () => ({ readSessionClaims: async () => session.claims }));
@@ -19,16 +20,7 @@ let datasetId = 0;
 let userId = 0;
 const values: number[] = [];
 
-const settings = (B: number, seed: string) => ({
-  dataset: { datasetId, versionId: null },
-  filter: null,
-  statistic: { name: 'median', column: 'nitrate' },
-  scheme: { name: 'ordinary' },
-  B,
-  seed,
-  level: 0.95,
-  methods: ['percentile'],
-});
+const settings = (B: number, seed: string) => medianSettings(datasetId, { B, seed, methods: ['percentile'] });
 
 interface SseEvent {
   event: string;
@@ -68,27 +60,19 @@ async function open(runId: number) {
 }
 
 beforeAll(async () => {
-  svc = await import('@/lib/runs/service');
-  const { insertUser } = await import('@/db/queries/users');
-  const { createLab } = await import('@/db/queries/labs');
-  const { storeTable } = await import('@/lib/datasets/store');
-  const { tableFromRows } = await import('@/lib/datasets');
-  const { createMemo } = await import('@/lib/memos');
-  userId = await insertUser({ email: 'events@example.org', name: 'Eve Events', passwordHash: 'x' });
-  labId = await createLab('Events lab', userId);
-  session.claims = { userId, sessionVersion: 0 };
   // 20,000 invented nitrate readings (mg/L): with B = 20,000 a run draws 4·10⁸ indices, long
   // enough (about a second or more) for several progress events.
   for (let i = 0; i < 20_000; i++) values.push(Number((1.5 + ((i * 7919) % 3001) / 1000).toFixed(3)));
-  const stored = await storeTable({ newDataset: { labId, name: 'Many readings' } }, tableFromRows(['nitrate'], values.map((v) => [v])), { kind: 'seed' }, userId);
-  datasetId = stored.datasetId;
-  memoId = await createMemo(labId, userId, 'Events memo');
+  ({ svc, userId, labId, datasetId, memoId } = await seedRunLab({
+    user: { email: 'events@example.org', name: 'Eve Events' },
+    lab: 'Events lab',
+    dataset: { name: 'Many readings', columns: ['nitrate'], rows: values.map((v) => [v]) },
+    memo: 'Events memo',
+  }));
+  session.claims = { userId, sessionVersion: 0 };
 });
 
-afterAll(async () => {
-  const { closeComputePool } = await import('@/lib/compute');
-  await closeComputePool();
-});
+closeComputePoolAfterAll();
 
 describe('run progress as server-sent events', () => {
   it('streams progress while a long run computes, then the current run with its result', async () => {

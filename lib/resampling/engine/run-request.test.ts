@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { everyStatistic } from '@/tests/support/statistics';
 import { EngineError } from '../errors';
 import { parseRequest } from '../contract/parse';
 import { runRequest } from './run-request';
@@ -50,25 +51,7 @@ describe('determinism', () => {
 describe('every statistic × interval method gives a finite, NaN-free response', () => {
   const x = upstream;
   const y = downstream;
-  const stats = [
-    { name: 'mean', column: 'x' },
-    { name: 'median', column: 'x' },
-    { name: 'trimmed-mean', column: 'x', trim: 0.2 },
-    { name: 'quantile', column: 'x', p: 0.8 },
-    { name: 'variance', column: 'x' },
-    { name: 'sd', column: 'x' },
-    { name: 'mad', column: 'x' },
-    { name: 'iqr', column: 'x' },
-    { name: 'geometric-mean', column: 'x' },
-    { name: 'cv', column: 'x' },
-    { name: 'correlation', x: 'x', y: 'y' },
-    { name: 'correlation', x: 'x', y: 'y', method: 'spearman' },
-    { name: 'ratio-of-means', numerator: 'y', denominator: 'x' },
-    { name: 'mean-difference', column: 'x', group: 'g', levels: ['a', 'b'] },
-    { name: 'median-difference', column: 'x', group: 'g', levels: ['a', 'b'] },
-    { name: 'regression-slope', x: 'x', y: 'y' },
-    { name: 'regression-intercept', x: 'x', y: 'y' },
-  ];
+  const stats = everyStatistic({ x: 'x', y: 'y', group: 'g', levels: ['a', 'b'], regression: { x: 'x', y: 'y' }, p: 0.8, pearson: true });
   for (const statistic of stats) {
     it(`${statistic.name}${'method' in statistic ? ` ${statistic.method}` : ''}`, () => {
       const r = runRequest({ data: { x, y, g: x.map((_, i) => (i % 2 ? 'a' : 'b')) }, statistic, B: 400, seed: 'all', intervals: { methods: all5 }, include: ['convergence', 'jackknife'] });
