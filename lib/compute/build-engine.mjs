@@ -1,19 +1,24 @@
 // Builds the engine's plain-JavaScript bundles with esbuild, for worker threads and the
-// command line: dist/engine/worker.cjs (the worker entry) and dist/engine/cli.mjs (with the
-// engine in a chunk of its own, chunk-*.mjs, that the command line imports only after it has
-// started its workers). Worker threads need plain JS found at run time (under vitest, the
-// CLI and `next start` alike), so the bundle is resolved from the project root and rebuilt
-// when any source file under lib/resampling or lib/compute changed (a signature of paths,
-// sizes and mtimes is kept in dist/engine/stamp.json). Builds go to a temporary folder and
-// are renamed into place, so concurrent builders never leave a half-written file.
+// command line: dist/engine/worker.cjs (the worker entry) and dist/engine/cli.cjs (the command
+// line, whose engine modules are evaluated only once it has started its workers), plus
+// dist/engine/cli.cjs.cache, V8's code cache of the command line after a small warm-up request
+// (code-cache.mjs; scripts/compute.mjs runs the bundle with it). Worker threads need plain JS
+// found at run time (under vitest, the CLI and `next start` alike), so the bundle is resolved
+// from the project root and rebuilt when any source file under lib/resampling or lib/compute
+// changed (a signature of paths, sizes and mtimes is kept in dist/engine/stamp.json). Builds go
+// to a temporary folder and are renamed into place, so concurrent builders never leave a
+// half-written file.
 //
-// Start-up cost is what the two shapes are for: a worker thread starts faster from
-// CommonJS (no ES module loader to set up in the new thread), and without zod — requests are
-// validated on the main thread, so in the worker bundle zod's exports are inert stand-ins that
-// only build unused schemas (and throw if anything ever parses with one there).
+// Start-up cost is what the shapes are for: CommonJS starts faster than an ES module (no
+// module loader to set up, and only a script can use a code cache on Node 20); the worker
+// bundle has no zod — requests are validated on the main thread, so there zod's exports are
+// inert stand-ins that only build unused schemas (and throw if anything ever parses with one);
+// and seedrandom's `require('crypto')`, only used to seed from entropy (the engine always
+// passes a seed), gets an empty module instead of loading node:crypto.
 //
 //   node lib/compute/build-engine.mjs            build if stale, print the bundle folder
 //   node lib/compute/build-engine.mjs --force    always rebuild
+import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readdirSync, readFileSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
@@ -23,8 +28,10 @@ const EXTRA_FILES = ['package-lock.json', 'tsconfig.json'];
 export const BUNDLE_DIR = 'dist/engine';
 export const ENTRIES = { worker: 'lib/compute/worker-entry.ts', cli: 'lib/compute/cli.ts' };
 const WORKER_FILE = 'worker.cjs';
-/** Chunks of an older build are removed once they are this old (a process started earlier may still import one). */
-const STALE_CHUNK_MS = 60 * 60 * 1000;
+const CLI_FILE = 'cli.cjs';
+const CLI_CACHE = 'cli.cjs.cache';
+/** Files of older layouts (an ES-module command line in chunks) are removed once they are this old. */
+const STALE_FILE_MS = 60 * 60 * 1000;
 
 /** Project root: the folder holding lib/compute/build-engine.mjs. */
 export function projectRoot() {
@@ -67,7 +74,7 @@ export function sourceSignature(root = projectRoot()) {
 
 export function bundlePaths(root = projectRoot()) {
   const dir = path.join(root, BUNDLE_DIR);
-  return { dir, worker: path.join(dir, WORKER_FILE), cli: path.join(dir, 'cli.mjs'), stamp: path.join(dir, 'stamp.json') };
+  return { dir, worker: path.join(dir, WORKER_FILE), cli: path.join(dir, CLI_FILE), cliCache: path.join(dir, CLI_CACHE), stamp: path.join(dir, 'stamp.json') };
 }
 
 export function isFresh(root = projectRoot()) {
@@ -108,6 +115,41 @@ export default inert;`;
   };
 }
 
+/** seedrandom's optional `require('crypto')` (entropy seeding, never used by the engine) → an empty module. */
+const seedrandomWithoutCrypto = {
+  name: 'seedrandom-without-crypto',
+  setup(b) {
+    b.onResolve({ filter: /^crypto$/ }, (args) => (/[\\/]seedrandom[\\/]/.test(args.importer) ? { path: 'crypto', namespace: 'no-crypto' } : undefined));
+    b.onLoad({ filter: /.*/, namespace: 'no-crypto' }, () => ({ contents: 'module.exports = {};', loader: 'js' }));
+  },
+};
+
+/**
+ * A small, typical request (an Estimate block's median with percentile and BCa intervals) that
+ * the command line runs once after a build, to fill its code cache with what such a run compiles.
+ */
+function warmUpRequest() {
+  const x = Array.from({ length: 60 }, (_, i) => Math.round(Math.exp(Math.sin(i * 12.9898) * 0.8 + 1) * 100) / 100);
+  return JSON.stringify({ data: { x }, statistic: { name: 'median', column: 'x' }, B: 1000, seed: 'code-cache', intervals: { level: 0.95, methods: ['percentile', 'bca'] } });
+}
+
+/**
+ * Writes the command line's code cache (code-cache.mjs) by running the new bundle once on the
+ * warm-up request. A failure leaves no cache, which only makes starts slower: say so, go on.
+ */
+function writeCodeCache(dir) {
+  const r = spawnSync(process.execPath, [fileURLToPath(new URL('./code-cache.mjs', import.meta.url)), '--write', path.join(dir, CLI_FILE), path.join(dir, CLI_CACHE), '-', '--threads', '0'], {
+    input: warmUpRequest(),
+    encoding: 'utf8',
+    timeout: 60_000,
+  });
+  if (r.status !== 0 || !existsSync(path.join(dir, CLI_CACHE))) {
+    process.stderr.write(`build-engine: no code cache for the command line (warm-up run exited ${r.status}): ${(r.stderr || r.stdout || '').slice(-500)}\n`);
+    return false;
+  }
+  return true;
+}
+
 /** Builds both bundles (always). Returns the bundle paths. */
 export async function build(root = projectRoot()) {
   const esbuild = await import('esbuild');
@@ -121,6 +163,8 @@ export async function build(root = projectRoot()) {
       outdir: tmp,
       bundle: true,
       platform: 'node',
+      format: 'cjs',
+      outExtension: { '.js': '.cjs' },
       target: 'node20',
       sourcemap: false,
       minify: true,
@@ -129,32 +173,20 @@ export async function build(root = projectRoot()) {
       tsconfig: path.join(root, 'tsconfig.json'),
       metafile: true,
     };
-    const cli = await esbuild.build({
-      ...common,
-      entryPoints: { cli: ENTRIES.cli },
-      format: 'esm',
-      splitting: true,
-      chunkNames: 'chunk-[hash]',
-      outExtension: { '.js': '.mjs' },
-      // Bundled CommonJS dependencies (seedrandom) may call require at run time.
-      banner: { js: "import { createRequire as __marginCreateRequire } from 'node:module'; const require = __marginCreateRequire(import.meta.url);" },
-      plugins: [serverOnlyEmpty],
-    });
-    const worker = await esbuild.build({
-      ...common,
-      entryPoints: { worker: ENTRIES.worker },
-      format: 'cjs',
-      outExtension: { '.js': '.cjs' },
-      plugins: [serverOnlyEmpty, await inertZod()],
-    });
+    // The command line's `await import('./index')` becomes a lazy require: the engine's modules
+    // (zod schemas and all) are evaluated only when it is reached, after the workers started.
+    const cli = await esbuild.build({ ...common, entryPoints: { cli: ENTRIES.cli }, plugins: [serverOnlyEmpty, seedrandomWithoutCrypto] });
+    const worker = await esbuild.build({ ...common, entryPoints: { worker: ENTRIES.worker }, plugins: [serverOnlyEmpty, seedrandomWithoutCrypto, await inertZod()] });
     const files = [...Object.keys(cli.metafile.outputs), ...Object.keys(worker.metafile.outputs)].map((f) => path.basename(f));
+    const cached = writeCodeCache(tmp);
     writeFileSync(path.join(tmp, 'stamp.json'), JSON.stringify({ signature, files, builtAt: new Date().toISOString() }));
     mkdirSync(p.dir, { recursive: true });
-    // Chunks first, the entry files and the stamp last: a reader never sees an entry whose chunk is missing.
-    const ordered = [...files.filter((f) => f.startsWith('chunk-')), ...files.filter((f) => !f.startsWith('chunk-')), 'stamp.json'];
-    for (const f of ordered) renameSync(path.join(tmp, f), path.join(p.dir, f));
+    // The stamp last: a reader never sees a fresh stamp beside old bundles. An old cache left
+    // beside a new bundle would only be rejected by V8, but is removed first all the same.
+    if (!cached) rmSync(p.cliCache, { force: true });
+    for (const f of [...(cached ? [CLI_CACHE] : []), ...files, 'stamp.json']) renameSync(path.join(tmp, f), path.join(p.dir, f));
     for (const f of readdirSync(p.dir)) {
-      if (f.startsWith('chunk-') && !files.includes(f) && Date.now() - statSync(path.join(p.dir, f)).mtimeMs > STALE_CHUNK_MS) rmSync(path.join(p.dir, f), { force: true });
+      if ((f.startsWith('chunk-') || f === 'cli.mjs') && Date.now() - statSync(path.join(p.dir, f)).mtimeMs > STALE_FILE_MS) rmSync(path.join(p.dir, f), { force: true });
     }
   } finally {
     rmSync(tmp, { recursive: true, force: true });

@@ -4,11 +4,12 @@
  * stdout and exits 1 (2 for a usage error, 3 for an internal error). Options:
  * `--threads N` (worker threads besides this one, which draws too; 0 = this thread only;
  * default one per core but one), `--pretty`, `--progress` (progress lines on stderr).
- * Bundled to dist/engine/cli.mjs and started by scripts/compute.mjs.
+ * Bundled to dist/engine/cli.cjs and started by scripts/compute.mjs.
  */
 import { readFileSync } from 'node:fs';
 import { EngineError } from '@/lib/resampling/errors';
 import { defaultWorkers, looksLarge, prewarmCompute } from './shared-pool';
+import { trace } from './trace';
 
 function usage(message: string): never {
   process.stdout.write(`${JSON.stringify({ error: { code: 'bad_request:usage', message, path: '' } })}\n`);
@@ -37,6 +38,7 @@ export async function main(argv: string[]): Promise<void> {
   }
   if (file === null) usage('give a request file, or - to read the request from standard input');
 
+  trace('cli:start');
   let text: string;
   try {
     text = readFileSync(file === '-' ? 0 : file, 'utf8');
@@ -54,7 +56,9 @@ export async function main(argv: string[]): Promise<void> {
   // validates and prepares the request.
   if (threads !== 0 && looksLarge(input)) prewarmCompute(threads ?? defaultWorkers(true));
   try {
+    trace('cli:workers-started');
     const { compute } = await import('./index');
+    trace('cli:engine-loaded');
     const response = await compute(input, {
       threads,
       callerDraws: true,
@@ -68,4 +72,5 @@ export async function main(argv: string[]): Promise<void> {
   }
 }
 
-await main(process.argv.slice(2));
+// Not a top-level await: the bundle is CommonJS (build-engine.mjs), and main reports its own errors.
+void main(process.argv.slice(2));

@@ -1,5 +1,5 @@
 import { execFile } from 'node:child_process';
-import { writeFileSync } from 'node:fs';
+import { statSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { promisify } from 'node:util';
@@ -146,7 +146,9 @@ describe('command line', () => {
   it('the bundle builder reports fresh bundles after a build', async () => {
     const { stdout } = await run(process.execPath, [path.join(root, 'lib/compute/build-engine.mjs')], { cwd: root });
     expect(stdout.trim()).toBe(path.join(root, 'dist/engine'));
-    const { isFresh } = await import('./build-engine.mjs' as string);
+    const { isFresh, bundlePaths } = await import('./build-engine.mjs' as string);
     expect(isFresh(root)).toBe(true);
+    // The build leaves the command line's code cache beside it (code-cache.mjs).
+    expect(statSync(bundlePaths(root).cliCache).size).toBeGreaterThan(10_000);
   }, 60_000);
 });

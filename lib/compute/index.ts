@@ -4,6 +4,7 @@ import { needsInnerSe, runChunkInto } from '@/lib/resampling/replicates/run-chun
 import { dataDigest } from './data-digest';
 import type { Drawn } from './pool';
 import { defaultWorkers, INLINE_DRAWS, poolFor, warmPoolFor } from './shared-pool';
+import { trace } from './trace';
 import { workerFile } from './worker-file';
 
 export { closeComputePool, defaultWorkers, INLINE_DRAWS, looksLarge, prewarmCompute } from './shared-pool';
@@ -33,6 +34,7 @@ export interface ComputeOptions {
  */
 export async function compute(input: unknown, opts: ComputeOptions = {}): Promise<EngineResponse> {
   const request = parseRequest(input);
+  trace('compute:validated');
   const signal = opts.signal;
   // Workers already started for this request (the command line starts them when the request
   // looks large): post the job to them now, so that they prepare the problem while this
@@ -49,6 +51,7 @@ export async function compute(input: unknown, opts: ComputeOptions = {}): Promis
   let problem: Problem;
   try {
     problem = prepareProblem(request);
+    trace('compute:prepared');
   } catch (e) {
     earlyJob?.setInline(null);
     throw e;
@@ -79,7 +82,10 @@ export async function compute(input: unknown, opts: ComputeOptions = {}): Promis
     drawn = await pending;
   }
   if (signal?.aborted) throw abortReason(signal);
-  return finalize(problem, drawn.theta, drawn.innerSe, () => signal?.aborted === true, digest ?? dataDigest(request.data));
+  trace('compute:drawn');
+  const response = finalize(problem, drawn.theta, drawn.innerSe, () => signal?.aborted === true, digest ?? dataDigest(request.data));
+  trace('compute:finalized');
+  return response;
 }
 
 async function drawInWorkers(problem: Problem, threads: number, opts: ComputeOptions): Promise<Drawn> {

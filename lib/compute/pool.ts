@@ -4,6 +4,7 @@ import { Worker } from 'node:worker_threads';
 import type { EngineRequest } from '@/lib/resampling';
 import { EngineError } from '@/lib/resampling/errors';
 import { CLAIMED, FINISHED, type FromWorker, type JobBuffers, type ToWorker } from './protocol';
+import { traced } from './trace';
 
 export interface Drawn {
   theta: Float64Array;
@@ -142,7 +143,7 @@ export class EnginePool {
       const k = Atomics.add(job.control, CLAIMED, 1);
       if (k >= job.buffers.chunks) return;
       try {
-        inline(k, job.theta, job.innerSe);
+        traced(`caller:chunk ${k}`, () => inline(k, job.theta, job.innerSe));
       } catch (e) {
         this.fail(job, e);
         return;

@@ -8,8 +8,11 @@ import { parentPort } from 'node:worker_threads';
 import { prepareProblem } from '@/lib/resampling/engine/prepare';
 import { runChunkInto } from '@/lib/resampling/replicates/run-chunk';
 import { CLAIMED, FINISHED, type FromWorker, type ToWorker } from './protocol';
+import { trace, traced } from './trace';
 
 const port = parentPort!;
+
+trace('worker:loaded');
 
 port.on('message', (msg: ToWorker) => {
   const { control: sab, theta: thetaSab, innerSe: innerSab, chunks } = msg.buffers;
@@ -19,10 +22,12 @@ port.on('message', (msg: ToWorker) => {
     // The other threads may have drawn every chunk while this one was starting.
     if (Atomics.load(control, CLAIMED) < chunks) {
       const problem = prepareProblem(msg.request);
+      trace('worker:prepared');
       const theta = new Float64Array(thetaSab);
       const innerSe = innerSab ? new Float64Array(innerSab) : null;
       while ((k = Atomics.add(control, CLAIMED, 1)) < chunks) {
-        runChunkInto(problem, k, theta, innerSe);
+        const chunk = k;
+        traced(`worker:chunk ${chunk}`, () => runChunkInto(problem, chunk, theta, innerSe));
         Atomics.add(control, FINISHED, 1);
         port.postMessage({ type: 'chunk', job: msg.job, k } satisfies FromWorker);
       }

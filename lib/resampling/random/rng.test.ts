@@ -18,7 +18,8 @@ describe('engine generator = seedrandom tychei', () => {
 
   it('bulk addCounts draws exactly the indices fillIndices lists (and uniformIndex above 2¹⁶)', () => {
     for (const m of [1, 2, 7, 1000, 65_536, 65_537, 2_000_000]) {
-      for (const times of [1, 999, 3000]) {
+      // 512 and 513 straddle one batch of 256 outputs (two draws each) in the 16-bit loops.
+      for (const times of [1, 2, 511, 512, 513, 999, 3000, 10_001]) {
         const a = createRng('s', `m${m}`);
         const b = createRng('s', `m${m}`);
         const size = Math.min(m, 5000);

@@ -37,6 +37,8 @@ const TWO32 = 4294967296;
 const TWO16 = 65536;
 /** Up to this many units, each 32-bit output gives two indices (its 16-bit halves). */
 export const SMALL_M = 65536;
+/** Outputs per call of a 16-bit batch loop (addDirect16). */
+const BATCH_16 = 256;
 
 export class TycheI implements Rng {
   private a: number;
@@ -106,82 +108,102 @@ export class TycheI implements Rng {
 
   /** m ≤ 2¹⁶: two indices per 32-bit output, Lemire's method on each 16-bit half. */
   private addDirect16(counts: Int32Array, m: number, times: number): void {
-    let a = this.a | 0;
-    let b = this.b | 0;
-    let c = this.c | 0;
-    let d = this.d | 0;
     const threshold = (TWO16 - m) % m;
     let k = 0;
-    // Branch-free while both halves fit: a rejected half adds 0 to a valid cell (its index
-    // x >>> 16 is below m either way), since with m = 10⁴ about 8% of halves are rejected at
-    // random and a mispredicted branch costs more than the add. Outputs go in batches of
-    // q = ⌊(times − k)/2⌋, which can accept at most times − k draws, so the inner loop is a
-    // plain counted loop and each output in it has room for both halves; a last single index
-    // takes the first acceptable half of the next outputs (lastIndex16) — the same draws in
-    // the same order as one output at a time. (The rare last index lives in its own method so
-    // that the hot loop has no code that first runs after V8 has optimized it, which made it
-    // deoptimize on every call.)
+    // Outputs go in batches of q ≤ ⌊(times − k)/2⌋, which can accept at most times − k draws,
+    // so each batch is a plain counted loop and each output in it has room for both halves;
+    // within a batch, times − k stays ≥ 2, so stopping is only ever decided between batches
+    // and the draws are the same, in the same order, as one output at a time. A last single
+    // index takes the first acceptable half of the next outputs (lastIndex16).
+    //
+    // Batches are also capped at BATCH_16 outputs, so that the loop is many short calls
+    // rather than one long one: V8 then optimizes the batch function as a whole after its
+    // first calls, instead of running the loop in on-stack-replacement code compiled in the
+    // middle of the first call (without type feedback for the code after the loop), which on
+    // the command line ran about 1.7× slower for the first 100–200 ms, at random (see
+    // bench/README.md).
     for (;;) {
-      const q = (times - k) >> 1;
+      const q = Math.min((times - k) >> 1, BATCH_16);
       if (q === 0) break;
-      for (let i = 0; i < q; i++) {
-        b = (b << 25) ^ (b >>> 7) ^ c;
-        c = (c - d) | 0;
-        d = (d << 24) ^ (d >>> 8) ^ a;
-        a = (a - b) | 0;
-        b = (b << 20) ^ (b >>> 12) ^ c;
-        c = (c - d) | 0;
-        d = (d << 16) ^ (c >>> 16) ^ a;
-        a = (a - b) | 0;
-        const x1 = (a >>> 16) * m;
-        const x2 = (a & 0xffff) * m;
-        const g1 = accepted(x1, threshold);
-        const g2 = accepted(x2, threshold);
-        counts[x1 >>> 16] += g1;
-        counts[x2 >>> 16] += g2;
-        k += g1 + g2;
-      }
+      k += this.direct16Batch(counts, m, threshold, q);
     }
-    this.a = a;
-    this.b = b;
-    this.c = c;
-    this.d = d;
     if (k < times) counts[this.lastIndex16(m, threshold)]++;
   }
 
-  private addVia16(counts: Int32Array, m: number, times: number, units: Int32Array): void {
+  /** q outputs, both halves of each: draws accepted by Lemire's test land in counts; returns how many. */
+  private direct16Batch(counts: Int32Array, m: number, threshold: number, q: number): number {
     let a = this.a | 0;
     let b = this.b | 0;
     let c = this.c | 0;
     let d = this.d | 0;
-    const threshold = (TWO16 - m) % m;
     let k = 0;
-    for (;;) {
-      const q = (times - k) >> 1;
-      if (q === 0) break;
-      for (let i = 0; i < q; i++) {
-        b = (b << 25) ^ (b >>> 7) ^ c;
-        c = (c - d) | 0;
-        d = (d << 24) ^ (d >>> 8) ^ a;
-        a = (a - b) | 0;
-        b = (b << 20) ^ (b >>> 12) ^ c;
-        c = (c - d) | 0;
-        d = (d << 16) ^ (c >>> 16) ^ a;
-        a = (a - b) | 0;
-        const x1 = (a >>> 16) * m;
-        const x2 = (a & 0xffff) * m;
-        const g1 = accepted(x1, threshold);
-        const g2 = accepted(x2, threshold);
-        counts[units[x1 >>> 16]] += g1;
-        counts[units[x2 >>> 16]] += g2;
-        k += g1 + g2;
-      }
+    // Branch-free: a rejected half adds 0 to a valid cell (its index x >>> 16 is below m
+    // either way), since with m = 10⁴ about 8% of halves are rejected at random and a
+    // mispredicted branch costs more than the add.
+    for (let i = 0; i < q; i++) {
+      b = (b << 25) ^ (b >>> 7) ^ c;
+      c = (c - d) | 0;
+      d = (d << 24) ^ (d >>> 8) ^ a;
+      a = (a - b) | 0;
+      b = (b << 20) ^ (b >>> 12) ^ c;
+      c = (c - d) | 0;
+      d = (d << 16) ^ (c >>> 16) ^ a;
+      a = (a - b) | 0;
+      const x1 = (a >>> 16) * m;
+      const x2 = (a & 0xffff) * m;
+      const g1 = accepted(x1, threshold);
+      const g2 = accepted(x2, threshold);
+      counts[x1 >>> 16] += g1;
+      counts[x2 >>> 16] += g2;
+      k += g1 + g2;
     }
     this.a = a;
     this.b = b;
     this.c = c;
     this.d = d;
+    return k;
+  }
+
+  /** As addDirect16, each index mapped through units. */
+  private addVia16(counts: Int32Array, m: number, times: number, units: Int32Array): void {
+    const threshold = (TWO16 - m) % m;
+    let k = 0;
+    for (;;) {
+      const q = Math.min((times - k) >> 1, BATCH_16);
+      if (q === 0) break;
+      k += this.via16Batch(counts, m, threshold, q, units);
+    }
     if (k < times) counts[units[this.lastIndex16(m, threshold)]]++;
+  }
+
+  private via16Batch(counts: Int32Array, m: number, threshold: number, q: number, units: Int32Array): number {
+    let a = this.a | 0;
+    let b = this.b | 0;
+    let c = this.c | 0;
+    let d = this.d | 0;
+    let k = 0;
+    for (let i = 0; i < q; i++) {
+      b = (b << 25) ^ (b >>> 7) ^ c;
+      c = (c - d) | 0;
+      d = (d << 24) ^ (d >>> 8) ^ a;
+      a = (a - b) | 0;
+      b = (b << 20) ^ (b >>> 12) ^ c;
+      c = (c - d) | 0;
+      d = (d << 16) ^ (c >>> 16) ^ a;
+      a = (a - b) | 0;
+      const x1 = (a >>> 16) * m;
+      const x2 = (a & 0xffff) * m;
+      const g1 = accepted(x1, threshold);
+      const g2 = accepted(x2, threshold);
+      counts[units[x1 >>> 16]] += g1;
+      counts[units[x2 >>> 16]] += g2;
+      k += g1 + g2;
+    }
+    this.a = a;
+    this.b = b;
+    this.c = c;
+    this.d = d;
+    return k;
   }
 
   /**
