@@ -6,21 +6,24 @@
 // and the floor: drawing the n·B indices alone. Prints medians of repeated runs, peak RSS
 // (GNU time's maximum resident set size of the process tree) and the ratios, with targets
 // R/Margin ≥ 10, scipy/Margin ≥ 5, Margin peak RSS < 300 MB. Results go to bench/results/.
+// Every program runs without the sandbox's own settings (bench/support/timed.ts, benchEnv);
+// Margin is also timed with the environment as it is, and both are printed.
 //
-//   npm run bench                 (RREPS=3 rounds; REPS=6 Margin runs in all, by default)
+//   npm run bench                 (RREPS=5 rounds; REPS=10 Margin runs in all, by default)
 import { execFileSync, spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { availableParallelism, loadavg, tmpdir } from 'node:os';
 import path from 'node:path';
 import { createRng } from '@/lib/resampling';
 import { measureFloor } from './resampling/floor';
+import { benchEnv, median, peakRss, type Run, timed as timedIn } from './support/timed';
 
 const root = process.cwd();
 const n = Number(process.env.N ?? 10_000);
 const B = Number(process.env.B ?? 10_000);
-const reps = Number(process.env.REPS ?? 6);
-const slowReps = Number(process.env.RREPS ?? 3);
-const hasTime = existsSync('/usr/bin/time');
+const reps = Number(process.env.REPS ?? 10);
+const slowReps = Number(process.env.RREPS ?? 5);
+const { env, removed } = benchEnv();
 
 // Invented data: n lognormal nitrate readings (mg/L), from the engine's own seeded generator.
 const rng = createRng('bench', 'data');
@@ -36,27 +39,7 @@ const dataFile = path.join(dir, 'x.txt');
 writeFileSync(requestFile, JSON.stringify({ data: { x }, statistic: { name: 'median', column: 'x' }, B, seed: 'bench', intervals: { level: 0.95, methods: ['percentile'] } }));
 writeFileSync(dataFile, `${x.join('\n')}\n`);
 
-interface Run {
-  seconds: number;
-  rssMB: number | null;
-  out: string;
-}
-
-function timed(cmd: string, args: string[], env: NodeJS.ProcessEnv = process.env): Run {
-  const full = hasTime ? ['/usr/bin/time', ['-f', '__TIME__ %e %M', cmd, ...args]] : [cmd, args];
-  const t0 = performance.now();
-  const r = spawnSync(full[0] as string, full[1] as string[], { cwd: root, env, encoding: 'utf8', maxBuffer: 256 * 1024 * 1024 });
-  const seconds = (performance.now() - t0) / 1000;
-  if (r.status !== 0) throw new Error(`${cmd} ${args.join(' ')} failed (${r.status}): ${r.stderr.slice(-2000)}`);
-  const m = /__TIME__ ([\d.]+) (\d+)/.exec(r.stderr ?? '');
-  return { seconds, rssMB: m ? Number(m[2]) / 1024 : null, out: r.stdout.trim() };
-}
-
-function median(v: number[]): number {
-  const s = [...v].sort((a, b) => a - b);
-  return s.length % 2 ? s[(s.length - 1) / 2] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
-}
-
+const timed = (cmd: string, args: string[], withEnv: NodeJS.ProcessEnv = env): Run => timedIn(cmd, args, { cwd: root, env: withEnv });
 
 console.log(`Resampling benchmark: median, n = ${n}, B = ${B}, percentile interval; ${process.env.HOSTNAME ?? 'this machine'}, ${os()} cores`);
 console.log('building the engine bundle (not timed) …');
@@ -64,17 +47,12 @@ execFileSync(process.execPath, [path.join(root, 'lib/compute/build-engine.mjs')]
 timed('npm', ['run', '-s', 'compute', '--', requestFile]); // warm the file cache
 
 const rAvailable = spawnSync('Rscript', ['-e', 'library(boot)'], { encoding: 'utf8' }).status === 0;
-const scipyEnv = { ...process.env };
-const unsetBlas = 'OPENBLAS_CORETYPE' in scipyEnv;
-if (unsetBlas) {
-  delete scipyEnv.OPENBLAS_CORETYPE;
-  delete scipyEnv.OPENBLAS_L2_SIZE;
-}
 const pyAvailable = spawnSync('/usr/bin/python3', ['-c', 'import scipy.stats'], { encoding: 'utf8' }).status === 0;
+if (removed.length) console.log(`every program runs without ${removed.join(', ')} (bench/support/timed.ts); Margin also with them`);
 
 // Rounds interleave the programs, so that load from anything else on the machine falls on all
 // of them alike; Margin runs `reps / slowReps` times per round.
-const runs: Record<string, Run[]> = { margin: [], r: [], scipyDefault: [], scipyBatch: [] };
+const runs: Record<string, Run[]> = { margin: [], marginAsIs: [], r: [], scipyDefault: [], scipyBatch: [] };
 const perRound = Math.max(1, Math.round(reps / slowReps));
 for (let round = 0; round < slowReps; round++) {
   const step = (key: string, label: string, f: () => Run) => {
@@ -83,18 +61,19 @@ for (let round = 0; round < slowReps; round++) {
     process.stdout.write(`  round ${round + 1}/${slowReps} ${label}: ${x.seconds.toFixed(3)} s${x.rssMB ? `, ${x.rssMB.toFixed(0)} MB` : ''}\n`);
   };
   for (let i = 0; i < perRound; i++) step('margin', 'margin', () => timed('npm', ['run', '-s', 'compute', '--', requestFile]));
+  if (removed.length) step('marginAsIs', 'margin (environment as it is)', () => timed('npm', ['run', '-s', 'compute', '--', requestFile], process.env));
   if (rAvailable) step('r', 'R boot', () => timed('Rscript', [path.join(root, 'bench/resampling/boot.R'), dataFile, String(B), '1']));
   if (pyAvailable) {
-    step('scipyDefault', 'scipy (batch default)', () => timed('/usr/bin/python3', [path.join(root, 'bench/resampling/scipy_bench.py'), dataFile, String(B), '1', 'none'], scipyEnv));
-    step('scipyBatch', 'scipy (batch 1000)', () => timed('/usr/bin/python3', [path.join(root, 'bench/resampling/scipy_bench.py'), dataFile, String(B), '1', '1000'], scipyEnv));
+    step('scipyDefault', 'scipy (batch default)', () => timed('/usr/bin/python3', [path.join(root, 'bench/resampling/scipy_bench.py'), dataFile, String(B), '1', 'none']));
+    step('scipyBatch', 'scipy (batch 1000)', () => timed('/usr/bin/python3', [path.join(root, 'bench/resampling/scipy_bench.py'), dataFile, String(B), '1', '1000']));
   }
 }
 const summary = (list: Run[]) => {
   if (!list.length) return null;
-  const rss = list.map((r) => r.rssMB).filter((v): v is number => v !== null);
-  return { seconds: median(list.map((r) => r.seconds)), rssMB: rss.length ? Math.max(...rss) : null, runs: list.map((r) => r.seconds), out: list[0].out };
+  return { seconds: median(list.map((r) => r.seconds)), rssMB: peakRss(list), runs: list.map((r) => r.seconds), out: list[0].out };
 };
 const margin = summary(runs.margin)!;
+const marginAsIs = summary(runs.marginAsIs);
 const marginOut = JSON.parse(margin.out);
 const r = summary(runs.r);
 const scipyDefault = summary(runs.scipyDefault);
@@ -107,6 +86,7 @@ const floor = measureFloor(JSON.parse(readFileSync(requestFile, 'utf8')));
 const fmt = (v: number | null | undefined, d = 2) => (v === null || v === undefined ? 'n/a' : v.toFixed(d));
 const rows = [
   ['Margin (npm run -s compute)', margin.seconds, margin.rssMB, `${marginOut.intervals.percentile.lower.toFixed(4)} – ${marginOut.intervals.percentile.upper.toFixed(4)}`],
+  ...(marginAsIs ? [['Margin, environment as it is', marginAsIs.seconds, marginAsIs.rssMB, `with ${removed.join(', ')}`] as const] : []),
   ['R boot (Rscript)', r?.seconds ?? null, r?.rssMB ?? null, r?.out ?? 'not available'],
   ['scipy bootstrap, batch default', scipyDefault?.seconds ?? null, scipyDefault?.rssMB ?? null, scipyDefault?.out ?? 'not available'],
   ['scipy bootstrap, batch 1000', scipyBatch?.seconds ?? null, scipyBatch?.rssMB ?? null, scipyBatch?.out ?? 'not available'],
@@ -116,19 +96,20 @@ for (const [label, s, rss, out] of rows) console.log(`  ${label.padEnd(32)} ${fm
 
 const ratioR = r ? r.seconds / margin.seconds : null;
 const ratioPy = scipyBest ? scipyBest.seconds / margin.seconds : null;
+const ratioPyAsIs = scipyBest && marginAsIs ? scipyBest.seconds / marginAsIs.seconds : null;
 const floorParallel = floor.floorMs / Math.min(2, os());
 console.log('\nratios (target):');
 console.log(`  R boot / Margin                 ${fmt(ratioR, 1)}×   (≥ 10×) ${ratioR === null ? '' : ratioR >= 10 ? 'met' : 'NOT met'}`);
 console.log(`  scipy (faster setting) / Margin ${fmt(ratioPy, 1)}×   (≥ 5×) ${ratioPy === null ? '' : ratioPy >= 5 ? 'met' : 'NOT met'}`);
+if (ratioPyAsIs !== null) console.log(`    … with Margin in the environment as it is: ${fmt(ratioPyAsIs, 1)}×`);
 console.log(`  Margin peak RSS                 ${fmt(margin.rssMB, 0)} MB (< 300 MB) ${margin.rssMB === null ? '' : margin.rssMB < 300 ? 'met' : 'NOT met'}`);
 console.log('\nthe floor (one thread, in process):');
 console.log(`  drawing ${floor.draws.toExponential(0)} indices alone      ${fmt(floor.floorMs, 0)} ms  (${fmt((floor.floorMs * 1e6) / floor.draws)} ns per index)`);
 console.log(`  engine replicate loop (draws + median) ${fmt(floor.engineMs, 0)} ms = ${fmt(floor.engineMs / floor.floorMs)}× the floor`);
 console.log(`  whole Margin process vs floor on ${Math.min(2, os())} cores (${fmt(floorParallel, 0)} ms): ${fmt((margin.seconds * 1000) / floorParallel)}×; process start, parsing and output make up the rest`);
-if (unsetBlas) console.log('  (OPENBLAS_CORETYPE / OPENBLAS_L2_SIZE were unset for the scipy runs only)');
 
 mkdirSync(path.join(root, 'bench/results'), { recursive: true });
-const result = { when: new Date().toISOString(), n, B, margin, r, scipyDefault, scipyBatch, ratioR, ratioPy, floor };
+const result = { when: new Date().toISOString(), n, B, removedFromEnvironment: removed, margin, marginAsIs, r, scipyDefault, scipyBatch, ratioR, ratioPy, ratioPyAsIs, floor, loadAverage: loadavg() };
 writeFileSync(path.join(root, 'bench/results/resampling.json'), `${JSON.stringify(result, null, 2)}\n`);
 console.log(`\nwritten: bench/results/resampling.json`);
 

@@ -6,44 +6,26 @@
 //   cluster   Margin cluster (500 sites × 20 readings), median and mean
 //             vs `Rscript bench/structured/cluster.R` — boot() over site ids, rebuilding the
 //             data from the drawn sites with unlist(split(...)[i])
+// Every program runs without the sandbox's own settings (bench/support/timed.ts, benchEnv).
 // Prints medians of runs, peak RSS (GNU time) and the ratios R / Margin, target ≥ 10×; and,
 // for scale, the seconds inside the computation alone (Margin's runRequest on one thread,
 // R's boot()/tsboot() + boot.ci() as timed by the R script) — process start-up excluded.
 //   node --import tsx bench/structured.ts     (also run at the end of `npm run bench`)
 //   REPS (Margin runs, default 5), RREPS (R runs, default 3)
 import { execFileSync, spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { createRng, runRequest } from '@/lib/resampling';
+import { benchEnv, median, peakRss, type Run, timed as timedIn } from './support/timed';
 
 const root = process.cwd();
 const n = 10_000;
 const B = Number(process.env.B ?? 10_000);
 const reps = Number(process.env.REPS ?? 5);
 const slowReps = Number(process.env.RREPS ?? 3);
-const hasTime = existsSync('/usr/bin/time');
-
-interface Run {
-  seconds: number;
-  rssMB: number | null;
-  out: string;
-}
-
-function timed(cmd: string, args: string[]): Run {
-  const full: [string, string[]] = hasTime ? ['/usr/bin/time', ['-f', '__TIME__ %e %M', cmd, ...args]] : [cmd, args];
-  const t0 = performance.now();
-  const r = spawnSync(full[0], full[1], { cwd: root, encoding: 'utf8', maxBuffer: 256 * 1024 * 1024 });
-  const seconds = (performance.now() - t0) / 1000;
-  if (r.status !== 0) throw new Error(`${cmd} ${args.join(' ')} failed (${r.status}): ${r.stderr.slice(-2000)}`);
-  const m = /__TIME__ ([\d.]+) (\d+)/.exec(r.stderr ?? '');
-  return { seconds, rssMB: m ? Number(m[2]) / 1024 : null, out: r.stdout.trim() };
-}
-
-function median(v: number[]): number {
-  const s = [...v].sort((a, b) => a - b);
-  return s.length % 2 ? s[(s.length - 1) / 2] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
-}
+const { env } = benchEnv();
+const timed = (cmd: string, args: string[]): Run => timedIn(cmd, args, { cwd: root, env });
 
 export interface StructuredCase {
   name: string;
@@ -130,9 +112,8 @@ export function runStructuredBench(): StructuredCase[] {
       }
       const insideMargin = median(insideRuns);
       const insideR = r.length ? median(r.map((x) => Number(/inside ([\d.]+)/.exec(x.out)?.[1] ?? Number.NaN))) : null;
-      const rss = (runs: Run[]) => (runs.some((x) => x.rssMB !== null) ? Math.max(...runs.map((x) => x.rssMB ?? 0)) : null);
-      const margin = { seconds: median(m.map((x) => x.seconds)), rssMB: rss(m), runs: m.map((x) => x.seconds), se };
-      const rr = r.length ? { seconds: median(r.map((x) => x.seconds)), rssMB: rss(r), runs: r.map((x) => x.seconds), out: r[0].out } : null;
+      const margin = { seconds: median(m.map((x) => x.seconds)), rssMB: peakRss(m), runs: m.map((x) => x.seconds), se };
+      const rr = r.length ? { seconds: median(r.map((x) => x.seconds)), rssMB: peakRss(r), runs: r.map((x) => x.seconds), out: r[0].out } : null;
       const ratio = rr ? rr.seconds / margin.seconds : null;
       const insideRatio = insideR !== null ? insideR / insideMargin : null;
       out.push({ name: c.name, inside: { margin: insideMargin, r: insideR, ratio: insideRatio }, margin, r: rr, ratio });

@@ -2,7 +2,9 @@
 // `npm run -s compute -- FILE`: runs the engine's command line from its prebuilt bundle
 // (dist/engine/cli.cjs) with V8's code cache of it (lib/compute/code-cache.mjs), rebuilding
 // both first when lib/resampling or lib/compute changed.
-// Plain JS on purpose: starting TypeScript through tsx would cost ~0.3 s per call.
+// Plain JS on purpose: starting TypeScript through tsx would cost ~0.3 s per call. The npm
+// script clears NODE_EXTRA_CA_CERTS for this process: the engine opens no network connection,
+// and Node reads and parses that certificate bundle at every start (~40 ms here).
 import { ensureBuilt } from '../lib/compute/build-engine.mjs';
 import { runWithCodeCache } from '../lib/compute/code-cache.mjs';
 

@@ -1,4 +1,5 @@
 import seedrandom from 'seedrandom';
+import { kernelOf, type TallyKernel } from './tally-kernel';
 import { uniformIndex as uniformIndex32 } from './uniform-index';
 
 /** A seeded random source: 32-bit integers, doubles in [0, 1), and bulk index counts. */
@@ -80,7 +81,9 @@ export class TycheI implements Rng {
 
   addCounts(counts: Int32Array, m: number, times: number, units: Int32Array | null): void {
     if (m <= SMALL_M) {
-      if (units === null) this.addDirect16(counts, m, times);
+      const kernel = kernelOf(counts);
+      if (kernel && (units === null || units.buffer === counts.buffer)) this.addWasm16(kernel, counts, m, times, units);
+      else if (units === null) this.addDirect16(counts, m, times);
       else this.addVia16(counts, m, times, units);
     } else if (units === null) this.addDirect32(counts, m, times);
     else this.addVia32(counts, m, times, units);
@@ -105,6 +108,34 @@ export class TycheI implements Rng {
 
   // The loops below differ only in where a draw lands; they are kept separate so each stays
   // monomorphic in V8, with the generator state in local int32 variables.
+
+  /**
+   * addDirect16 / addVia16 run by the WebAssembly loops (tally-kernel.ts) on counts (and units)
+   * in a kernel's memory: the state goes through the kernel's memory, and the batches and the
+   * last single index are as in addDirect16, so the draws are the same.
+   */
+  private addWasm16(kernel: TallyKernel, counts: Int32Array, m: number, times: number, units: Int32Array | null): void {
+    const state = kernel.state;
+    state[0] = this.a;
+    state[1] = this.b;
+    state[2] = this.c;
+    state[3] = this.d;
+    const threshold = (TWO16 - m) % m;
+    let k = 0;
+    for (;;) {
+      const q = (times - k) >> 1;
+      if (q === 0) break;
+      k += units === null ? kernel.direct16(counts.byteOffset, m, threshold, q) : kernel.via16(counts.byteOffset, m, threshold, q, units.byteOffset);
+    }
+    this.a = state[0];
+    this.b = state[1];
+    this.c = state[2];
+    this.d = state[3];
+    if (k < times) {
+      const x = this.lastIndex16(m, threshold);
+      counts[units === null ? x : units[x]]++;
+    }
+  }
 
   /** m ≤ 2¹⁶: two indices per 32-bit output, Lemire's method on each 16-bit half. */
   private addDirect16(counts: Int32Array, m: number, times: number): void {

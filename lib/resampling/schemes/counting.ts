@@ -1,4 +1,5 @@
 import type { Rng } from '../random/rng';
+import { tallyArena } from '../random/tally-kernel';
 import type { PreparedStatistic } from '../statistics/types';
 import type { CountingScheme, PreparedScheme } from './types';
 
@@ -11,8 +12,13 @@ import type { CountingScheme, PreparedScheme } from './types';
  */
 export function countingScheme(statistic: PreparedStatistic, strata: Int32Array[], description: string, plainResampling: boolean): PreparedScheme {
   const n = statistic.n;
-  const counts = new Int32Array(n);
   const single = strata.length === 1 && isIdentity(strata[0]);
+  // Counts (and, with strata, the unit lists the draws go through) in WebAssembly memory, where
+  // the generator's tally loop runs in WebAssembly (random/tally-kernel.ts); plain arrays
+  // without it. The same draws either way.
+  const arena = tallyArena(n, single ? 0 : strata.reduce((a, s) => a + s.length, 0));
+  const counts = arena ? arena.counts : new Int32Array(n);
+  const drawUnits = arena && !single ? strata.map((s) => arena.copy(s)) : strata;
 
   function fillCounts(rng: Rng, c: Int32Array): void {
     c.fill(0);
@@ -20,8 +26,8 @@ export function countingScheme(statistic: PreparedStatistic, strata: Int32Array[
       rng.addCounts(c, n, n, null);
       return;
     }
-    for (let s = 0; s < strata.length; s++) {
-      const units = strata[s];
+    for (let s = 0; s < drawUnits.length; s++) {
+      const units = drawUnits[s];
       rng.addCounts(c, units.length, units.length, units);
     }
   }

@@ -1,0 +1,81 @@
+import { TALLY16_WASM_BASE64 } from './tally16-wasm';
+
+/**
+ * The WebAssembly tally loops (tally16.wat) and the memory they count into. A scheme that
+ * tallies draws into a count array asks for one here (tallyArena): the array is then a view on
+ * a small block of WebAssembly memory of its own, with room for the generator state and for
+ * unit lists, and TycheI.addCounts (rng.ts) runs the loop in WebAssembly whenever the counts
+ * (and units) it is given live in such a block — the same draws, in the same order, as its
+ * JavaScript loops, which remain for every other array and wherever WebAssembly is missing.
+ */
+
+export interface TallyKernel {
+  /** The generator state a, b, c, d, read and written by the loops. */
+  state: Int32Array;
+  /** q outputs tallied into counts (byte offset); returns how many draws were accepted. */
+  direct16(counts: number, m: number, threshold: number, q: number): number;
+  /** The same, each index x counted at counts[units[x]] (byte offsets). */
+  via16(counts: number, m: number, threshold: number, q: number, units: number): number;
+}
+
+export interface TallyArena {
+  /** The count array (zeroed), a view on the block's memory. */
+  counts: Int32Array;
+  /** A copy of `values` in the block's memory (for unit lists passed to addCounts). */
+  copy(values: Int32Array): Int32Array;
+}
+
+const kernels = new WeakMap<ArrayBufferLike, TallyKernel>();
+let compiled: WebAssembly.Module | null | undefined;
+
+function tallyModule(): WebAssembly.Module | null {
+  if (compiled === undefined) {
+    try {
+      compiled = typeof WebAssembly === 'object' ? new WebAssembly.Module(Uint8Array.from(atob(TALLY16_WASM_BASE64), (ch) => ch.charCodeAt(0))) : null;
+    } catch {
+      compiled = null;
+    }
+  }
+  return compiled;
+}
+
+const STATE_BYTES = 16;
+const PAGE = 65536;
+
+/**
+ * A block for a count array of n cells and up to `unitCells` cells of unit lists, or null when
+ * WebAssembly is not available (callers then use a plain Int32Array).
+ */
+export function tallyArena(n: number, unitCells = 0): TallyArena | null {
+  const mod = tallyModule();
+  if (!mod) return null;
+  const bytes = STATE_BYTES + 4 * (n + unitCells);
+  // The memory never grows: growing would detach the views handed out.
+  const memory = new WebAssembly.Memory({ initial: Math.max(1, Math.ceil(bytes / PAGE)) });
+  const exports = new WebAssembly.Instance(mod, { env: { memory } }).exports as unknown as {
+    direct16(cnt: number, m: number, thr: number, q: number, st: number): number;
+    via16(cnt: number, m: number, thr: number, q: number, st: number, units: number): number;
+  };
+  const buffer = memory.buffer;
+  kernels.set(buffer, {
+    state: new Int32Array(buffer, 0, 4),
+    direct16: (cnt, m, thr, q) => exports.direct16(cnt, m, thr, q, 0),
+    via16: (cnt, m, thr, q, units) => exports.via16(cnt, m, thr, q, 0, units),
+  });
+  let next = STATE_BYTES + 4 * n;
+  return {
+    counts: new Int32Array(buffer, STATE_BYTES, n),
+    copy(values) {
+      if (next + 4 * values.length > STATE_BYTES + 4 * (n + unitCells)) throw new RangeError('tallyArena: no room left for these units');
+      const view = new Int32Array(buffer, next, values.length);
+      view.set(values);
+      next += 4 * values.length;
+      return view;
+    },
+  };
+}
+
+/** The kernel whose memory holds this array, if any. */
+export function kernelOf(a: Int32Array): TallyKernel | undefined {
+  return kernels.get(a.buffer);
+}

@@ -1,0 +1,52 @@
+import { describe, expect, it } from 'vitest';
+import { createRng } from './rng';
+import { kernelOf, tallyArena } from './tally-kernel';
+import { TALLY16_WASM_BASE64 } from './tally16-wasm';
+
+describe('the WebAssembly tally loops (tally16.wat)', () => {
+  it('tally16-wasm.ts holds exactly what wabt compiles from tally16.wat', async () => {
+    // @ts-expect-error: a plain-JS build script without type declarations
+    const { compileTally16 } = await import('../../../scripts/build-wasm.mjs');
+    const bytes: Buffer = await compileTally16();
+    expect(bytes.toString('base64')).toBe(TALLY16_WASM_BASE64);
+  });
+
+  it('draw exactly what the JavaScript loops draw: the same counts, then the same generator state', () => {
+    for (const m of [1, 2, 7, 1000, 10_000, 65_536]) {
+      for (const times of [1, 2, 511, 512, 513, 999, 3000, 10_001]) {
+        const arena = tallyArena(m);
+        expect(arena).not.toBeNull();
+        const viaWasm = arena!.counts;
+        expect(kernelOf(viaWasm)).toBeDefined();
+        const viaJs = new Int32Array(m);
+        const a = createRng('tally16', `m${m}t${times}`);
+        const b = createRng('tally16', `m${m}t${times}`);
+        // twice, so the second call starts from the state the first one left
+        for (let round = 0; round < 2; round++) {
+          a.addCounts(viaWasm, m, times, null);
+          b.addCounts(viaJs, m, times, null);
+        }
+        expect(Array.from(viaWasm)).toEqual(Array.from(viaJs));
+        expect(viaJs.reduce((s, c) => s + c, 0)).toBe(2 * times);
+        expect(a.int32()).toBe(b.int32());
+      }
+    }
+  });
+
+  it('with unit lists (strata) as well', () => {
+    const n = 5000;
+    const strata = [Int32Array.from({ length: 1200 }, (_, i) => 3 * i + 1), Int32Array.from({ length: 3 }, (_, i) => i * 1000), Int32Array.from({ length: 777 }, (_, i) => n - 1 - i)];
+    const arena = tallyArena(n, strata.reduce((s, u) => s + u.length, 0))!;
+    const wasmUnits = strata.map((u) => arena.copy(u));
+    const viaJs = new Int32Array(n);
+    const a = createRng('tally16', 'strata');
+    const b = createRng('tally16', 'strata');
+    for (let s = 0; s < strata.length; s++) {
+      a.addCounts(arena.counts, strata[s].length, strata[s].length, wasmUnits[s]);
+      b.addCounts(viaJs, strata[s].length, strata[s].length, strata[s]);
+    }
+    expect(Array.from(arena.counts)).toEqual(Array.from(viaJs));
+    expect(a.int32()).toBe(b.int32());
+    expect(() => arena.copy(new Int32Array(1))).toThrow(RangeError);
+  });
+});
