@@ -20,7 +20,8 @@ import vm from 'node:vm';
  * is there. Returns the compiled script, whose createCachedData() includes whatever has been
  * compiled by the time it is called.
  */
-export function runWithCodeCache(file, cacheFile) {
+export function runWithCodeCache(bundle, cacheFile) {
+  const file = path.resolve(bundle);
   const source = readFileSync(file, 'utf8');
   let cachedData;
   try {

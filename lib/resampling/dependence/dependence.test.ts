@@ -43,6 +43,14 @@ describe('lag1Autocorrelation', () => {
     expect(lag1Autocorrelation(fromR[s])).toBeCloseTo(fromR[`${s}_r1`][0], 12);
   });
 
+  it('is exactly the ratio of the lag-1 and lag-0 autocovariances, bit for bit', () => {
+    for (const s of [...SERIES.map((k) => fromR[k]), ar1(1001, 0.6, 'lag1-exact'), [1, 2], [-0.5, 1e6, 3, 3, 7]]) {
+      const [c0, c1] = autocovariance(s, 1);
+      expect(lag1Autocorrelation(s)).toBe(c1 / c0);
+    }
+    expect(() => lag1Autocorrelation([1, Number.NaN, 2])).toThrow(RangeError);
+  });
+
   it('is undefined for constant or one-value data', () => {
     expect(lag1Autocorrelation([3, 3, 3, 3])).toBeNull();
     expect(lag1Autocorrelation([3])).toBeNull();

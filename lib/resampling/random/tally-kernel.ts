@@ -1,4 +1,4 @@
-import { TALLY16_WASM_BASE64 } from './tally16-wasm';
+import { TALLY16_WASM } from './tally16-wasm';
 
 /**
  * The WebAssembly tally loops (tally16.wat) and the memory they count into. A scheme that
@@ -31,7 +31,7 @@ let compiled: WebAssembly.Module | null | undefined;
 function tallyModule(): WebAssembly.Module | null {
   if (compiled === undefined) {
     try {
-      compiled = typeof WebAssembly === 'object' ? new WebAssembly.Module(Uint8Array.from(atob(TALLY16_WASM_BASE64), (ch) => ch.charCodeAt(0))) : null;
+      compiled = typeof WebAssembly === 'object' ? new WebAssembly.Module(TALLY16_WASM) : null;
     } catch {
       compiled = null;
     }
