@@ -50,12 +50,19 @@ export function tallyArena(n: number, unitCells = 0): TallyArena | null {
   const mod = tallyModule();
   if (!mod) return null;
   const bytes = STATE_BYTES + 4 * (n + unitCells);
-  // The memory never grows: growing would detach the views handed out.
-  const memory = new WebAssembly.Memory({ initial: Math.max(1, Math.ceil(bytes / PAGE)) });
-  const exports = new WebAssembly.Instance(mod, { env: { memory } }).exports as unknown as {
+  let memory: WebAssembly.Memory;
+  let exports: {
     direct16(cnt: number, m: number, thr: number, q: number, st: number): number;
     via16(cnt: number, m: number, thr: number, q: number, st: number, units: number): number;
   };
+  try {
+    // The memory never grows: growing would detach the views handed out.
+    memory = new WebAssembly.Memory({ initial: Math.max(1, Math.ceil(bytes / PAGE)) });
+    exports = new WebAssembly.Instance(mod, { env: { memory } }).exports as unknown as typeof exports;
+  } catch {
+    // Each memory reserves address space of its own; should that ever run out, plain arrays do.
+    return null;
+  }
   const buffer = memory.buffer;
   kernels.set(buffer, {
     state: new Int32Array(buffer, 0, 4),
