@@ -44,11 +44,15 @@ const timed = (cmd: string, args: string[], withEnv: NodeJS.ProcessEnv = env): R
 console.log(`Resampling benchmark: median, n = ${n}, B = ${B}, percentile interval; ${process.env.HOSTNAME ?? 'this machine'}, ${os()} cores`);
 console.log('building the engine bundle (not timed) …');
 execFileSync(process.execPath, [path.join(root, 'lib/compute/build-engine.mjs')], { cwd: root });
-timed('npm', ['run', '-s', 'compute', '--', requestFile]); // warm the file cache
 
 const rAvailable = spawnSync('Rscript', ['-e', 'library(boot)'], { encoding: 'utf8' }).status === 0;
 const pyAvailable = spawnSync('/usr/bin/python3', ['-c', 'import scipy.stats'], { encoding: 'utf8' }).status === 0;
 if (removed.length) console.log(`every program runs without ${removed.join(', ')} (bench/support/timed.ts); Margin also with them`);
+// One untimed run of each program first, so none is timed with its files still out of the page cache.
+console.log('warming the file cache (one untimed run of each program) …');
+timed('npm', ['run', '-s', 'compute', '--', requestFile]);
+if (rAvailable) timed('Rscript', [path.join(root, 'bench/resampling/boot.R'), dataFile, '100', '1']);
+if (pyAvailable) timed('/usr/bin/python3', [path.join(root, 'bench/resampling/scipy_bench.py'), dataFile, '100', '1', '1000']);
 
 // Rounds interleave the programs, so that load from anything else on the machine falls on all
 // of them alike; Margin runs `reps / slowReps` times per round.
