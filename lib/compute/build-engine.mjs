@@ -6,8 +6,7 @@
 // found at run time (under vitest, the CLI and `next start` alike), so the bundle is resolved
 // from the project root and rebuilt when any source file under lib/resampling or lib/compute
 // changed (a signature of paths, sizes and mtimes is kept in dist/engine/stamp.json). Builds go
-// to a temporary folder and are renamed into place, so concurrent builders never leave a
-// half-written file.
+// to a temporary folder and are renamed into place (lib/build/bundle-on-demand.mjs).
 //
 // Start-up cost is what the shapes are for: CommonJS starts faster than an ES module (no
 // module loader to set up, and only a script can use a code cache on Node 20); the worker
@@ -19,11 +18,11 @@
 //   node lib/compute/build-engine.mjs            build if stale, print the bundle folder
 //   node lib/compute/build-engine.mjs --force    always rebuild
 import { spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, readdirSync, readFileSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { existsSync, readdirSync, readFileSync, rmSync, statSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 
-const SOURCE_DIRS = ['lib/resampling', 'lib/compute'];
+const SOURCE_DIRS = ['lib/resampling', 'lib/compute', 'lib/build'];
 const EXTRA_FILES = ['package-lock.json', 'tsconfig.json'];
 export const BUNDLE_DIR = 'dist/engine';
 export const ENTRIES = { worker: 'lib/compute/worker-entry.ts', cli: 'lib/compute/cli.ts' };
@@ -91,14 +90,6 @@ export function isFresh(root = projectRoot()) {
   return stamp.signature === sourceSignature(root);
 }
 
-const serverOnlyEmpty = {
-  name: 'server-only-empty',
-  setup(b) {
-    b.onResolve({ filter: /^server-only$/ }, () => ({ path: 'server-only', namespace: 'empty' }));
-    b.onLoad({ filter: /.*/, namespace: 'empty' }, () => ({ contents: '', loader: 'js' }));
-  },
-};
-
 /** zod for the worker bundle: every export of the real package, each an inert chainable stand-in. */
 async function inertZod() {
   const names = Object.keys(await import('zod')).filter((n) => n !== 'default');
@@ -153,43 +144,24 @@ function writeCodeCache(dir) {
 /** Builds both bundles (always). Returns the bundle paths. */
 export async function build(root = projectRoot()) {
   const esbuild = await import('esbuild');
+  const { buildInPlace, nodeBundleOptions, serverOnlyEmpty } = await import('../build/bundle-on-demand.mjs');
   const p = bundlePaths(root);
   const signature = sourceSignature(root);
-  const tmp = path.join(root, 'dist', `.engine-build-${process.pid}-${Date.now()}`);
-  mkdirSync(tmp, { recursive: true });
-  try {
-    const common = {
-      absWorkingDir: root,
-      outdir: tmp,
-      bundle: true,
-      platform: 'node',
-      format: 'cjs',
-      outExtension: { '.js': '.cjs' },
-      target: 'node20',
-      sourcemap: false,
-      minify: true,
-      legalComments: 'none',
-      logLevel: 'error',
-      tsconfig: path.join(root, 'tsconfig.json'),
-      metafile: true,
-    };
+  let cached = false;
+  await buildInPlace(root, 'engine', p.dir, async (tmp) => {
+    const common = { ...nodeBundleOptions(root, tmp), format: 'cjs', outExtension: { '.js': '.cjs' } };
     // The command line's `await import('./index')` becomes a lazy require: the engine's modules
     // (zod schemas and all) are evaluated only when it is reached, after the workers started.
     const cli = await esbuild.build({ ...common, entryPoints: { cli: ENTRIES.cli }, plugins: [serverOnlyEmpty, seedrandomWithoutCrypto] });
     const worker = await esbuild.build({ ...common, entryPoints: { worker: ENTRIES.worker }, plugins: [serverOnlyEmpty, seedrandomWithoutCrypto, await inertZod()] });
     const files = [...Object.keys(cli.metafile.outputs), ...Object.keys(worker.metafile.outputs)].map((f) => path.basename(f));
-    const cached = writeCodeCache(tmp);
-    writeFileSync(path.join(tmp, 'stamp.json'), JSON.stringify({ signature, files, builtAt: new Date().toISOString() }));
-    mkdirSync(p.dir, { recursive: true });
-    // The stamp last: a reader never sees a fresh stamp beside old bundles. An old cache left
-    // beside a new bundle would only be rejected by V8, but is removed first all the same.
+    cached = writeCodeCache(tmp);
+    // An old cache left beside a new bundle would only be rejected by V8, but is removed all the same.
     if (!cached) rmSync(p.cliCache, { force: true });
-    for (const f of [...(cached ? [CLI_CACHE] : []), ...files, 'stamp.json']) renameSync(path.join(tmp, f), path.join(p.dir, f));
-    for (const f of readdirSync(p.dir)) {
-      if ((f.startsWith('chunk-') || f === 'cli.mjs') && Date.now() - statSync(path.join(p.dir, f)).mtimeMs > STALE_FILE_MS) rmSync(path.join(p.dir, f), { force: true });
-    }
-  } finally {
-    rmSync(tmp, { recursive: true, force: true });
+    return { files: [...(cached ? [CLI_CACHE] : []), ...files], stamp: { signature, files } };
+  });
+  for (const f of readdirSync(p.dir)) {
+    if ((f.startsWith('chunk-') || f === 'cli.mjs') && Date.now() - statSync(path.join(p.dir, f)).mtimeMs > STALE_FILE_MS) rmSync(path.join(p.dir, f), { force: true });
   }
   return p;
 }

@@ -2,19 +2,18 @@
 // as worker threads need it (under `next start`, vitest, scripts and the benchmark alike).
 // The bundle is rebuilt when any file it was built from changed: esbuild's metafile lists the
 // inputs, and dist/datasets/stamp.json keeps them with a signature of their sizes and mtimes.
-// Builds go to a temporary folder and are renamed into place, so concurrent builders never
-// leave a half-written file.
+// Builds go to a temporary folder and are renamed into place (lib/build/bundle-on-demand.mjs).
 //
 //   node lib/datasets/build-worker.mjs            build if stale, print the bundle path
 //   node lib/datasets/build-worker.mjs --force    always rebuild
 import { createHash } from 'node:crypto';
-import { existsSync, mkdirSync, readFileSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { existsSync, readFileSync, statSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 
 export const ENTRY = 'lib/datasets/worker-entry.ts';
 export const BUNDLE_DIR = 'dist/datasets';
-const ALWAYS = ['package-lock.json', 'tsconfig.json', 'lib/datasets/build-worker.mjs'];
+const ALWAYS = ['package-lock.json', 'tsconfig.json', 'lib/datasets/build-worker.mjs', 'lib/build/bundle-on-demand.mjs'];
 
 /** Project root: the folder holding lib/datasets/build-worker.mjs. */
 export function projectRoot() {
@@ -56,43 +55,21 @@ export function isFresh(root = projectRoot()) {
 
 export async function build(root = projectRoot()) {
   const esbuild = await import('esbuild');
+  const { buildInPlace, nodeBundleOptions, serverOnlyEmpty } = await import('../build/bundle-on-demand.mjs');
   const p = bundlePaths(root);
-  const tmp = path.join(root, 'dist', `.datasets-build-${process.pid}-${Date.now()}`);
-  mkdirSync(tmp, { recursive: true });
-  try {
+  await buildInPlace(root, 'datasets', p.dir, async (tmp) => {
     const result = await esbuild.build({
-      absWorkingDir: root,
+      ...nodeBundleOptions(root, tmp),
       entryPoints: { worker: ENTRY },
-      outdir: tmp,
       outExtension: { '.js': '.mjs' },
-      bundle: true,
-      platform: 'node',
       format: 'esm',
-      target: 'node20',
-      minify: true,
-      legalComments: 'none',
-      logLevel: 'error',
-      metafile: true,
-      tsconfig: path.join(root, 'tsconfig.json'),
       // Bundled CommonJS dependencies (papaparse) may call require at run time.
       banner: { js: "import { createRequire as __marginCreateRequire } from 'node:module'; const require = __marginCreateRequire(import.meta.url);" },
-      plugins: [
-        {
-          name: 'server-only-empty',
-          setup(b) {
-            b.onResolve({ filter: /^server-only$/ }, () => ({ path: 'server-only', namespace: 'empty' }));
-            b.onLoad({ filter: /.*/, namespace: 'empty' }, () => ({ contents: '', loader: 'js' }));
-          },
-        },
-      ],
+      plugins: [serverOnlyEmpty],
     });
     const inputs = Object.keys(result.metafile.inputs).filter((f) => !f.includes(':'));
-    writeFileSync(path.join(tmp, 'stamp.json'), JSON.stringify({ inputs, signature: signature(root, inputs), builtAt: new Date().toISOString() }));
-    mkdirSync(p.dir, { recursive: true });
-    for (const f of ['worker.mjs', 'stamp.json']) renameSync(path.join(tmp, f), path.join(p.dir, f));
-  } finally {
-    rmSync(tmp, { recursive: true, force: true });
-  }
+    return { files: ['worker.mjs'], stamp: { inputs, signature: signature(root, inputs) } };
+  });
   return p;
 }
 

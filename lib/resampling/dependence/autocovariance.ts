@@ -1,3 +1,5 @@
+import { seriesMean } from './series-mean';
+
 /**
  * Sample autocovariances of a series in row order.
  *
@@ -18,13 +20,7 @@ export function autocovariance(x: ArrayLike<number>, maxLag: number): Float64Arr
   const n = x.length;
   if (n === 0) throw new RangeError('autocovariance needs at least one value');
   if (!Number.isInteger(maxLag) || maxLag < 0) throw new RangeError('maxLag must be a non-negative integer');
-  let sum = 0;
-  for (let i = 0; i < n; i++) {
-    const v = x[i];
-    if (!Number.isFinite(v)) throw new RangeError(`autocovariance: value ${i + 1} is not a finite number`);
-    sum += v;
-  }
-  const mean = sum / n;
+  const mean = seriesMean(x);
   const centred = new Float64Array(n);
   for (let i = 0; i < n; i++) centred[i] = x[i] - mean;
   const out = new Float64Array(maxLag + 1);

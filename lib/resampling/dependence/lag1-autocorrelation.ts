@@ -1,3 +1,5 @@
+import { seriesMean } from './series-mean';
+
 /**
  * Lag-1 sample autocorrelation of a series in row order.
  *
@@ -19,13 +21,7 @@ export function lag1Autocorrelation(x: ArrayLike<number>): number | null {
   // autocovariance(x, 1) in two passes instead of four (mean; then both sums at once): the
   // same terms added in the same order, so the same bits, for a check that runs once per
   // request on cold code (each pass over 10⁴ values costs a few ms before V8 optimizes it).
-  let sum = 0;
-  for (let i = 0; i < n; i++) {
-    const v = x[i];
-    if (!Number.isFinite(v)) throw new RangeError(`autocovariance: value ${i + 1} is not a finite number`);
-    sum += v;
-  }
-  const mean = sum / n;
+  const mean = seriesMean(x);
   let s0 = 0;
   let s1 = 0;
   let here = x[0] - mean;
