@@ -58,10 +58,15 @@ if (pyAvailable) timed('/usr/bin/python3', [path.join(root, 'bench/resampling/sc
 // of them alike; Margin runs `reps / slowReps` times per round.
 const runs: Record<string, Run[]> = { margin: [], marginAsIs: [], r: [], scipyDefault: [], scipyBatch: [] };
 const perRound = Math.max(1, Math.round(reps / slowReps));
+/** Each round's runs by program: the ratios are taken within a round, where load was alike. */
+const rounds: Record<string, number[]>[] = [];
 for (let round = 0; round < slowReps; round++) {
+  const inRound: Record<string, number[]> = {};
+  rounds.push(inRound);
   const step = (key: string, label: string, f: () => Run) => {
     const x = f();
     runs[key].push(x);
+    (inRound[key] ??= []).push(x.seconds);
     process.stdout.write(`  round ${round + 1}/${slowReps} ${label}: ${x.seconds.toFixed(3)} s${x.rssMB ? `, ${x.rssMB.toFixed(0)} MB` : ''}\n`);
   };
   for (let i = 0; i < perRound; i++) step('margin', 'margin', () => timed('npm', ['run', '-s', 'compute', '--', requestFile]));
@@ -98,22 +103,32 @@ const rows = [
 console.log(`\nwhole process, median of runs (load average at the end: ${loadavg().map((v) => v.toFixed(1)).join(' ')}):`);
 for (const [label, s, rss, out] of rows) console.log(`  ${label.padEnd(32)} ${fmt(s as number | null, 3).padStart(7)} s   peak RSS ${fmt(rss as number | null, 0).padStart(5)} MB   ${out}`);
 
-const ratioR = r ? r.seconds / margin.seconds : null;
-const ratioPy = scipyBest ? scipyBest.seconds / margin.seconds : null;
-const ratioPyAsIs = scipyBest && marginAsIs ? scipyBest.seconds / marginAsIs.seconds : null;
+// Ratios: the median over rounds of (reference ÷ Margin's median in the same round). The load
+// on this machine drifts over a run of minutes; a ratio of two medians taken over different
+// rounds can then say more about the drift than about the programs (both are printed).
+const pairedRatio = (ref: string, mine: string): number | null => {
+  const per = rounds.filter((x) => x[ref]?.length && x[mine]?.length).map((x) => median(x[ref]) / median(x[mine]));
+  return per.length ? median(per) : null;
+};
+const scipyKey = scipyBest === scipyBatch ? 'scipyBatch' : 'scipyDefault';
+const ratioR = pairedRatio('r', 'margin');
+const ratioPy = scipyBest ? pairedRatio(scipyKey, 'margin') : null;
+const ratioPyAsIs = scipyBest && marginAsIs ? pairedRatio(scipyKey, 'marginAsIs') : null;
+const ratioOfMedians = { r: r ? r.seconds / margin.seconds : null, scipy: scipyBest ? scipyBest.seconds / margin.seconds : null };
 const floorParallel = floor.floorMs / Math.min(2, os());
-console.log('\nratios (target):');
+console.log('\nratios, median over rounds of reference ÷ Margin in the same round (target):');
 console.log(`  R boot / Margin                 ${fmt(ratioR, 1)}×   (≥ 10×) ${ratioR === null ? '' : ratioR >= 10 ? 'met' : 'NOT met'}`);
 console.log(`  scipy (faster setting) / Margin ${fmt(ratioPy, 1)}×   (≥ 5×) ${ratioPy === null ? '' : ratioPy >= 5 ? 'met' : 'NOT met'}`);
 if (ratioPyAsIs !== null) console.log(`    … with Margin in the environment as it is: ${fmt(ratioPyAsIs, 1)}×`);
 console.log(`  Margin peak RSS                 ${fmt(margin.rssMB, 0)} MB (< 300 MB) ${margin.rssMB === null ? '' : margin.rssMB < 300 ? 'met' : 'NOT met'}`);
+console.log(`  (ratio of the medians above: R ${fmt(ratioOfMedians.r, 1)}×, scipy ${fmt(ratioOfMedians.scipy, 1)}×; per round, scipy ÷ Margin: ${rounds.map((x) => (x[scipyKey]?.length && x.margin?.length ? (median(x[scipyKey]) / median(x.margin)).toFixed(2) : '—')).join(', ')})`);
 console.log('\nthe floor (one thread, in process):');
 console.log(`  drawing ${floor.draws.toExponential(0)} indices alone      ${fmt(floor.floorMs, 0)} ms  (${fmt((floor.floorMs * 1e6) / floor.draws)} ns per index)`);
 console.log(`  engine replicate loop (draws + median) ${fmt(floor.engineMs, 0)} ms = ${fmt(floor.engineMs / floor.floorMs)}× the floor`);
 console.log(`  whole Margin process vs floor on ${Math.min(2, os())} cores (${fmt(floorParallel, 0)} ms): ${fmt((margin.seconds * 1000) / floorParallel)}×; process start, parsing and output make up the rest`);
 
 mkdirSync(path.join(root, 'bench/results'), { recursive: true });
-const result = { when: new Date().toISOString(), n, B, removedFromEnvironment: removed, margin, marginAsIs, r, scipyDefault, scipyBatch, ratioR, ratioPy, ratioPyAsIs, floor, loadAverage: loadavg() };
+const result = { when: new Date().toISOString(), n, B, removedFromEnvironment: removed, margin, marginAsIs, r, scipyDefault, scipyBatch, ratioR, ratioPy, ratioPyAsIs, ratioOfMedians, rounds, floor, loadAverage: loadavg() };
 writeFileSync(path.join(root, 'bench/results/resampling.json'), `${JSON.stringify(result, null, 2)}\n`);
 console.log(`\nwritten: bench/results/resampling.json`);
 

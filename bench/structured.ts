@@ -116,7 +116,10 @@ export function runStructuredBench(): StructuredCase[] {
       const insideR = r.length ? median(r.map((x) => Number(/inside ([\d.]+)/.exec(x.out)?.[1] ?? Number.NaN))) : null;
       const margin = { seconds: median(m.map((x) => x.seconds)), rssMB: peakRss(m), runs: m.map((x) => x.seconds), se };
       const rr = r.length ? { seconds: median(r.map((x) => x.seconds)), rssMB: peakRss(r), runs: r.map((x) => x.seconds), out: r[0].out } : null;
-      const ratio = rr ? rr.seconds / margin.seconds : null;
+      // R's run i against Margin's run i, taken one after the other: load on the machine drifts
+      // over minutes, and the pairs see alike load (the median of the pair ratios).
+      const pairs = Math.min(m.length, r.length);
+      const ratio = pairs ? median(Array.from({ length: pairs }, (_, i) => r[i].seconds / m[i].seconds)) : null;
       const insideRatio = insideR !== null ? insideR / insideMargin : null;
       out.push({ name: c.name, inside: { margin: insideMargin, r: insideR, ratio: insideRatio }, margin, r: rr, ratio });
       const f = (v: number | null, d = 2) => (v === null ? 'n/a' : v.toFixed(d));
