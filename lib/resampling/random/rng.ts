@@ -150,9 +150,10 @@ export class TycheI implements Rng {
     // Batches are also capped at BATCH_16 outputs, so that the loop is many short calls
     // rather than one long one: V8 then optimizes the batch function as a whole after its
     // first calls, instead of running the loop in on-stack-replacement code compiled in the
-    // middle of the first call (without type feedback for the code after the loop), which on
-    // the command line ran about 1.7× slower for the first 100–200 ms, at random (see
-    // bench/README.md).
+    // middle of the first call, without type feedback for the code after the loop, which then
+    // deoptimized and re-optimized again and again: on the command line the first chunks of
+    // 500 replicates took 30–60 ms instead of 12 (bench/README.md). Count arrays in
+    // WebAssembly memory skip these loops altogether (addWasm16).
     for (;;) {
       const q = Math.min((times - k) >> 1, BATCH_16);
       if (q === 0) break;
