@@ -4,7 +4,10 @@
 // both first when lib/resampling or lib/compute changed.
 // Plain JS on purpose: starting TypeScript through tsx would cost ~0.3 s per call. The npm
 // script clears NODE_EXTRA_CA_CERTS for this process: the engine opens no network connection,
-// and Node reads and parses that certificate bundle at every start (~40 ms here).
+// and Node reads and parses that certificate bundle at every start (~40 ms here). It also gives
+// V8 one background thread instead of four (--v8-pool-size=1, a Node option, so V8's code
+// caches still apply): the command line keeps every core busy drawing, and more background
+// threads only competed with it (~10 ms, medians of 2 × 16–20 interleaved runs here).
 import { ensureBuilt } from '../lib/compute/build-engine.mjs';
 import { runWithCodeCache } from '../lib/compute/code-cache.mjs';
 

@@ -62,6 +62,7 @@ export async function main(argv: string[]): Promise<void> {
     const response = await compute(input, {
       threads,
       callerDraws: true,
+      releaseWorkers: true,
       onProgress: progress ? (done, total) => process.stderr.write(`progress ${done}/${total}\n`) : undefined,
     });
     finish(pretty ? JSON.stringify(response, null, 2) : JSON.stringify(response), 0);
