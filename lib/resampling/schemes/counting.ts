@@ -3,6 +3,9 @@ import { tallyArena } from '../random/tally-kernel';
 import type { PreparedStatistic } from '../statistics/types';
 import type { CountingScheme, PreparedScheme } from './types';
 
+/** From this many units up, count arrays live in WebAssembly memory. */
+const WASM_MIN_UNITS = 256;
+
 /**
  * Resampling units with replacement within strata (one stratum = the ordinary bootstrap):
  * each stratum of size m gets m independent uniform draws from its own units, so stratum
@@ -10,16 +13,13 @@ import type { CountingScheme, PreparedScheme } from './types';
  * order, and straight into a count array — no index array, no copy of the data.
  * Cost: n index draws plus one evaluation of the statistic per replicate.
  */
-/** From this many units up, count arrays live in WebAssembly memory. */
-const WASM_MIN_UNITS = 256;
-
 export function countingScheme(statistic: PreparedStatistic, strata: Int32Array[], description: string, plainResampling: boolean): PreparedScheme {
   const n = statistic.n;
   const single = strata.length === 1 && isIdentity(strata[0]);
   // Counts (and, with strata, the unit lists the draws go through) in WebAssembly memory, where
   // the generator's tally loop runs in WebAssembly (random/tally-kernel.ts); plain arrays
-  // without it. The same draws either way.
-  // Small samples stay in JavaScript: there a call into WebAssembly per stratum costs more than its few draws.
+  // without it. The same draws either way. Small samples stay in JavaScript: for them a call
+  // into WebAssembly per stratum costs more than its few draws.
   const arena = n >= WASM_MIN_UNITS ? tallyArena(n, single ? 0 : strata.reduce((a, s) => a + s.length, 0)) : null;
   const counts = arena ? arena.counts : new Int32Array(n);
   const drawUnits = arena && !single ? strata.map((s) => arena.copy(s)) : strata;
