@@ -4,9 +4,9 @@
 // dist/engine/cli.cjs.cache, V8's code cache of the command line after a small warm-up request
 // (code-cache.mjs; scripts/compute.mjs runs the bundle with it). Worker threads need plain JS
 // found at run time (under vitest, the CLI and `next start` alike), so the bundle is resolved
-// from the project root and rebuilt when any source file under lib/resampling or lib/compute
-// changed (a signature of paths, sizes and mtimes is kept in dist/engine/stamp.json). Builds go
-// to a temporary folder and are renamed into place (lib/build/bundle-on-demand.mjs).
+// from the project root and rebuilt when any source file under lib/resampling, lib/compute or
+// lib/build changed (a signature of paths, sizes and mtimes is kept in dist/engine/stamp.json).
+// Builds go to a temporary folder and are renamed into place (lib/build/bundle-on-demand.mjs).
 //
 // Start-up cost is what the shapes are for: CommonJS starts faster than an ES module (no
 // module loader to set up, and only a script can use a code cache on Node 20); the worker
