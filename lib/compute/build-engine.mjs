@@ -147,7 +147,6 @@ export async function build(root = projectRoot()) {
   const { buildInPlace, nodeBundleOptions, serverOnlyEmpty } = await import('../build/bundle-on-demand.mjs');
   const p = bundlePaths(root);
   const signature = sourceSignature(root);
-  let cached = false;
   await buildInPlace(root, 'engine', p.dir, async (tmp) => {
     const common = { ...nodeBundleOptions(root, tmp), format: 'cjs', outExtension: { '.js': '.cjs' } };
     // The command line's `await import('./index')` becomes a lazy require: the engine's modules
@@ -155,7 +154,7 @@ export async function build(root = projectRoot()) {
     const cli = await esbuild.build({ ...common, entryPoints: { cli: ENTRIES.cli }, plugins: [serverOnlyEmpty, seedrandomWithoutCrypto] });
     const worker = await esbuild.build({ ...common, entryPoints: { worker: ENTRIES.worker }, plugins: [serverOnlyEmpty, seedrandomWithoutCrypto, await inertZod()] });
     const files = [...Object.keys(cli.metafile.outputs), ...Object.keys(worker.metafile.outputs)].map((f) => path.basename(f));
-    cached = writeCodeCache(tmp);
+    const cached = writeCodeCache(tmp);
     // An old cache left beside a new bundle would only be rejected by V8, but is removed all the same.
     if (!cached) rmSync(p.cliCache, { force: true });
     return { files: [...(cached ? [CLI_CACHE] : []), ...files], stamp: { signature, files } };

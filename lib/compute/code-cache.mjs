@@ -16,16 +16,16 @@ import { pathToFileURL } from 'node:url';
 import vm from 'node:vm';
 
 /**
- * Runs `file` (CommonJS) in this context with its own module object, using `cacheFile` when it
- * is there. Returns the compiled script, whose createCachedData() includes whatever has been
- * compiled by the time it is called.
+ * Runs `bundle` (CommonJS) in this context with its own module object, using `cacheFile` when
+ * it is given and there. Returns the compiled script, whose createCachedData() includes
+ * whatever has been compiled by the time it is called.
  */
 export function runWithCodeCache(bundle, cacheFile) {
   const file = path.resolve(bundle);
   const source = readFileSync(file, 'utf8');
   let cachedData;
   try {
-    cachedData = readFileSync(cacheFile);
+    cachedData = cacheFile ? readFileSync(cacheFile) : undefined;
   } catch {
     cachedData = undefined;
   }
@@ -46,7 +46,8 @@ if (process.argv[1] && pathToFileURL(path.resolve(process.argv[1])).href === imp
   }
   // The bundle reads its arguments from process.argv.slice(2), as when it is started itself.
   process.argv = [process.argv[0], bundle, ...args];
-  const script = runWithCodeCache(bundle, `${cache}.none`);
+  // No cache to start from: the one written at exit must hold this run's compilation alone.
+  const script = runWithCodeCache(bundle, null);
   process.on('exit', (code) => {
     if (code === 0) writeFileSync(cache, script.createCachedData());
   });

@@ -1,6 +1,7 @@
 import * as z from 'zod';
 import { medianFromCounts } from './count-scan';
 import { columnName } from './fields';
+import { lowerBound } from './lower-bound';
 import { sortUnits } from './sort-units';
 import { defineStatistic } from './types';
 import { onesCounts } from './weighted-sums';
@@ -22,13 +23,7 @@ function madFromCounts(sorted: Float64Array, order: Int32Array, counts: Int32Arr
   const centre = medianFromCounts(sorted, order, counts, total);
   const m = sorted.length;
   // first sorted position with value ≥ centre
-  let lo = 0;
-  let hi = m;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if (sorted[mid] < centre) lo = mid + 1;
-    else hi = mid;
-  }
+  const lo = lowerBound(sorted, centre);
   let left = lo - 1;
   let right = lo;
   let leftLeft = 0; // copies of sorted[left] not yet consumed

@@ -1,3 +1,5 @@
+import { lowerBound } from './lower-bound';
+
 /**
  * Sorts units by value once, so order statistics of any resample can be read from counts
  * by one scan in sorted order (no sort per replicate). Ties keep unit order (stable).
@@ -27,15 +29,8 @@ export function sortUnits(values: ArrayLike<number>, units?: ArrayLike<number>):
   const taken = new Int32Array(m);
   const order = new Int32Array(m);
   for (let j = 0; j < m; j++) {
-    const v = keys[j];
-    let lo = 0;
-    let hi = m;
-    while (lo < hi) {
-      const mid = (lo + hi) >>> 1;
-      if (ascending[mid] < v) lo = mid + 1;
-      else hi = mid;
-    }
-    order[lo + taken[lo]++] = ids ? ids[j] : j;
+    const p = lowerBound(ascending, keys[j]);
+    order[p + taken[p]++] = ids ? ids[j] : j;
   }
   const sorted = new Float64Array(m);
   for (let i = 0; i < m; i++) sorted[i] = values[order[i]];
