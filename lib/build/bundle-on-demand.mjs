@@ -25,7 +25,7 @@ export function nodeBundleOptions(root, outdir) {
     platform: 'node',
     target: 'node20',
     sourcemap: false,
-    minify: true,
+    minify: process.env.MARGIN_PROFILE_BUILD !== '1',
     legalComments: 'none',
     logLevel: 'error',
     tsconfig: path.join(root, 'tsconfig.json'),

@@ -18,7 +18,7 @@ describe('engine generator = seedrandom tychei', () => {
 
   it('bulk addCounts draws exactly the indices fillIndices lists (and uniformIndex above 2¹⁶)', () => {
     for (const m of [1, 2, 7, 1000, 65_536, 65_537, 2_000_000]) {
-      // 512 and 513 straddle one batch of 256 outputs (two draws each) in the 16-bit loops.
+      // 512 and 513 straddle one batch of 64 steps (eight draws each) in the 16-bit loops.
       for (const times of [1, 2, 511, 512, 513, 999, 3000, 10_001]) {
         const a = createRng('s', `m${m}`);
         const b = createRng('s', `m${m}`);
@@ -40,6 +40,36 @@ describe('engine generator = seedrandom tychei', () => {
           const c = createRng('s', `m${m}`);
           for (let k = 0; k < times; k++) expect(list[k]).toBe(uniformIndex(c, m));
         }
+      }
+    }
+  });
+
+  it('indices below 2¹⁶ are Lemire draws from four seedrandom tychei lanes, eight per step in order', () => {
+    // Sources: the seedrandom 3.0.5 package's Tyche-i for each lane's stream; Lemire, D. (2019),
+    // "Fast random integer generation in an interval", ACM TOMACS 29(1): 3 (multiply, keep the
+    // high part, reject when the low part is below 2^k mod m), here with k = 16.
+    for (const m of [3, 1000, 10_000, 65_536]) {
+      for (const times of [1, 7, 8, 9, 5003]) {
+        const rng = createRng('lanes', `m${m}`);
+        const ours = new Int32Array(2 * times);
+        // two calls: the second starts with the step after the first call's last one
+        rng.fillIndices(ours, 0, m, times);
+        rng.fillIndices(ours, times, m, times);
+        const lanes = [0, 1, 2, 3].map((j) => seedrandom.tychei(`lanes\u001fm${m}\u001flane:${j}`));
+        const threshold = (65536 - m) % m;
+        const ref: number[] = [];
+        for (const part of [0, 1]) {
+          const want = (part + 1) * times;
+          while (ref.length < want) {
+            for (const w of lanes.map((l) => l.int32())) {
+              for (const half of [w >>> 16, w & 0xffff]) {
+                const x = half * m;
+                if ((x & 0xffff) >= threshold && ref.length < want) ref.push(x >>> 16);
+              }
+            }
+          }
+        }
+        expect(Array.from(ours)).toEqual(ref);
       }
     }
   });

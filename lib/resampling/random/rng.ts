@@ -10,9 +10,10 @@ export interface Rng {
   double(): number;
   /**
    * Adds `times` uniform draws from [0, m) to counts — counts[units[i]] (or counts[i]
-   * without units). The bootstrap's hot loop. For m ≤ 2¹⁶ each 32-bit output gives two
-   * indices, one from each 16-bit half by Lemire's method (exactly uniform; an unused half at
-   * the end of a call is dropped); for larger m one index per output (uniform-index.ts).
+   * without units). The bootstrap's hot loop. For m ≤ 2¹⁶ the indices come from four lane
+   * generators stepped together, each output giving two indices, one from each 16-bit half by
+   * Lemire's method (exactly uniform; the unused indices of a call's last step are dropped);
+   * for larger m one index per output of the main generator (uniform-index.ts).
    */
   addCounts(counts: Int32Array, m: number, times: number, units: Int32Array | null): void;
   /** Writes the same `times` indices addCounts would draw into out[offset…], in draw order. */
@@ -31,23 +32,43 @@ export interface Rng {
  * Each random stream is seeded with the string `${seed}\u001f${stream}`: replicate chunk k
  * uses stream `chunk:k`, so a response does not depend on how chunks are spread over
  * worker threads. Nothing in the engine calls Math.random.
+ *
+ * Index draws below 2¹⁶ (every sample of up to 65,536 units) come instead from four more
+ * Tyche-i generators of the stream, its lanes, seeded with `${seed}\u001f${stream}\u001flane:j`
+ * (j = 0…3) and stepped together: step s gives the lanes' s-th outputs w₀…w₃, and with them
+ * eight candidate indices in the order w₀ high half, w₀ low half, w₁ high half, …, w₃ low half.
+ * One Tyche-i step is a chain of dependent operations; four independent ones run side by side
+ * in one SIMD vector (tally16.wat) at about the cost of one, which halved the draws' cost
+ * (bench/README.md). Each lane is exactly seedrandom's tychei for its seed string
+ * (random/rng.test.ts rebuilds the indices from four seedrandom generators).
  */
-export const RNG_NAME = 'tychei (Tyche-i, seeded by seedrandom 3.0.5)';
+export const RNG_NAME = 'tychei (Tyche-i, seeded by seedrandom 3.0.5; indices below 2^16 from four interleaved lane streams)';
 
 const TWO32 = 4294967296;
 const TWO16 = 65536;
-/** Up to this many units, each 32-bit output gives two indices (its 16-bit halves). */
+/** Up to this many units, indices come from the four lanes, two per output (its 16-bit halves). */
 export const SMALL_M = 65536;
-/** Outputs per call of a 16-bit batch loop (addDirect16). */
-const BATCH_16 = 256;
+/** Generators side by side for the 16-bit index draws (one SIMD vector of 32-bit lanes). */
+const LANES = 4;
+const LANE_WORDS = 4 * LANES;
+/** Steps of the four lanes per call of a 16-bit batch loop in JavaScript (addDirect16). */
+const BATCH_16 = 64;
 
 export class TycheI implements Rng {
   private a: number;
   private b: number;
   private c: number;
   private d: number;
+  /** The four lane generators' state (laneState), null until the first 16-bit index draw. */
+  private lanes: Int32Array | null = null;
+  /** Scratch: the lanes' outputs of one step. */
+  private readonly laneOut = new Int32Array(LANES);
 
-  constructor(state: { a: number; b: number; c: number; d: number }) {
+  /** `laneSeed`: the seed string of this stream, from which its lane generators are seeded. */
+  constructor(
+    state: { a: number; b: number; c: number; d: number },
+    private readonly laneSeed: string,
+  ) {
     this.a = state.a | 0;
     this.b = state.b | 0;
     this.c = state.c | 0;
@@ -93,11 +114,13 @@ export class TycheI implements Rng {
     // The reference path: one index at a time, in the order the fast loops below use.
     if (m <= SMALL_M) {
       const threshold = (TWO16 - m) % m;
+      const lanes = this.laneState();
+      const w = this.laneOut;
       let k = 0;
       while (k < times) {
-        const w = this.int32();
-        for (let half = 0; half < 2 && k < times; half++) {
-          const x = (half === 0 ? w >>> 16 : w & 0xffff) * m;
+        stepLanes(lanes, w);
+        for (let j = 0; j < 8 && k < times; j++) {
+          const x = (j & 1 ? w[j >> 1] & 0xffff : w[j >> 1] >>> 16) * m;
           if ((x & 0xffff) >= threshold) out[offset + k++] = x >>> 16;
         }
       }
@@ -106,149 +129,102 @@ export class TycheI implements Rng {
     for (let k = 0; k < times; k++) out[offset + k] = uniformIndex32(this, m);
   }
 
+  /**
+   * The four lane generators of the 16-bit index draws, seeded on first use: lane j is
+   * seedrandom's tychei for `${laneSeed}\u001flane:${j}` (state layout: a of lanes 0–3, then
+   * b, c, d — as the WebAssembly loops read it).
+   */
+  private laneState(): Int32Array {
+    if (this.lanes) return this.lanes;
+    const lanes = new Int32Array(LANE_WORDS);
+    for (let j = 0; j < LANES; j++) {
+      const s = seedrandom.tychei(`${this.laneSeed}\u001flane:${j}`, { state: true }).state() as unknown as { a: number; b: number; c: number; d: number };
+      lanes[j] = s.a;
+      lanes[LANES + j] = s.b;
+      lanes[2 * LANES + j] = s.c;
+      lanes[3 * LANES + j] = s.d;
+    }
+    return (this.lanes = lanes);
+  }
+
   // The loops below differ only in where a draw lands; they are kept separate so each stays
-  // monomorphic in V8, with the generator state in local int32 variables.
+  // monomorphic in V8.
 
   /**
    * addDirect16 / addVia16 run by the WebAssembly loops (tally-kernel.ts) on counts (and units)
-   * in a kernel's memory: the state goes through the kernel's memory, and the batches and the
-   * last single index are as in addDirect16, so the draws are the same.
+   * in a kernel's memory: the lane state goes through the kernel's memory, and the batches and
+   * the last few indices are as in addDirect16, so the draws are the same.
    */
   private addWasm16(kernel: TallyKernel, counts: Int32Array, m: number, times: number, units: Int32Array | null): void {
-    const state = kernel.state;
-    state[0] = this.a;
-    state[1] = this.b;
-    state[2] = this.c;
-    state[3] = this.d;
+    const lanes = this.laneState();
+    kernel.state.set(lanes);
     const threshold = (TWO16 - m) % m;
     let k = 0;
     for (;;) {
-      const q = (times - k) >> 1;
+      const q = (times - k) >> 3;
       if (q === 0) break;
       k += units === null ? kernel.direct16(counts.byteOffset, m, threshold, q) : kernel.via16(counts.byteOffset, m, threshold, q, units.byteOffset);
     }
-    this.a = state[0];
-    this.b = state[1];
-    this.c = state[2];
-    this.d = state[3];
-    if (k < times) {
-      const x = this.lastIndex16(m, threshold);
-      counts[units === null ? x : units[x]]++;
-    }
+    lanes.set(kernel.state);
+    if (k < times) this.lastFew16(counts, m, threshold, times - k, units);
   }
 
-  /** m ≤ 2¹⁶: two indices per 32-bit output, Lemire's method on each 16-bit half. */
+  /**
+   * m ≤ 2¹⁶: each step of the four lane generators gives eight indices, Lemire's method on each
+   * 16-bit half of each lane's output (lane 0 high half, lane 0 low half, lane 1 high half, …).
+   */
   private addDirect16(counts: Int32Array, m: number, times: number): void {
     const threshold = (TWO16 - m) % m;
     let k = 0;
-    // Outputs go in batches of q ≤ ⌊(times − k)/2⌋, which can accept at most times − k draws,
-    // so each batch is a plain counted loop and each output in it has room for both halves;
-    // within a batch, times − k stays ≥ 2, so stopping is only ever decided between batches
-    // and the draws are the same, in the same order, as one output at a time. A last single
-    // index takes the first acceptable half of the next outputs (lastIndex16).
+    // Steps go in batches of q ≤ ⌊(times − k)/8⌋, which can accept at most times − k draws,
+    // so each batch is a plain counted loop and every index of every step in it has room;
+    // stopping is only ever decided between batches, and the last few indices (fewer than
+    // eight) are taken one by one (lastFew16): the same draws, in the same order, as one
+    // index at a time (fillIndices).
     //
-    // Batches are also capped at BATCH_16 outputs, so that the loop is many short calls
-    // rather than one long one: V8 then optimizes the batch function as a whole after its
-    // first calls, instead of running the loop in on-stack-replacement code compiled in the
-    // middle of the first call, without type feedback for the code after the loop, which then
-    // deoptimized and re-optimized again and again: on the command line the first chunks of
-    // 500 replicates took 30–60 ms instead of 12 (bench/README.md). Count arrays in
-    // WebAssembly memory skip these loops altogether (addWasm16).
+    // Batches are also capped at BATCH_16 steps, so that the loop is many short calls rather
+    // than one long one: V8 then optimizes the batch function as a whole after its first
+    // calls, instead of running the loop in on-stack-replacement code compiled in the middle of
+    // the first call, which then deoptimized and re-optimized again and again (bench/README.md).
+    // Count arrays in WebAssembly memory skip these loops altogether (addWasm16).
+    const lanes = this.laneState();
     for (;;) {
-      const q = Math.min((times - k) >> 1, BATCH_16);
+      const q = Math.min((times - k) >> 3, BATCH_16);
       if (q === 0) break;
-      k += this.direct16Batch(counts, m, threshold, q);
+      k += direct16Batch(lanes, counts, m, threshold, q);
     }
-    if (k < times) counts[this.lastIndex16(m, threshold)]++;
-  }
-
-  /** q outputs, both halves of each: draws accepted by Lemire's test land in counts; returns how many. */
-  private direct16Batch(counts: Int32Array, m: number, threshold: number, q: number): number {
-    let a = this.a | 0;
-    let b = this.b | 0;
-    let c = this.c | 0;
-    let d = this.d | 0;
-    let k = 0;
-    // Branch-free: a rejected half adds 0 to a valid cell (its index x >>> 16 is below m
-    // either way), since with m = 10⁴ about 8% of halves are rejected at random and a
-    // mispredicted branch costs more than the add.
-    for (let i = 0; i < q; i++) {
-      b = (b << 25) ^ (b >>> 7) ^ c;
-      c = (c - d) | 0;
-      d = (d << 24) ^ (d >>> 8) ^ a;
-      a = (a - b) | 0;
-      b = (b << 20) ^ (b >>> 12) ^ c;
-      c = (c - d) | 0;
-      d = (d << 16) ^ (c >>> 16) ^ a;
-      a = (a - b) | 0;
-      const x1 = (a >>> 16) * m;
-      const x2 = (a & 0xffff) * m;
-      const g1 = accepted(x1, threshold);
-      const g2 = accepted(x2, threshold);
-      counts[x1 >>> 16] += g1;
-      counts[x2 >>> 16] += g2;
-      k += g1 + g2;
-    }
-    this.a = a;
-    this.b = b;
-    this.c = c;
-    this.d = d;
-    return k;
+    if (k < times) this.lastFew16(counts, m, threshold, times - k, null);
   }
 
   /** As addDirect16, each index mapped through units. */
   private addVia16(counts: Int32Array, m: number, times: number, units: Int32Array): void {
     const threshold = (TWO16 - m) % m;
     let k = 0;
+    const lanes = this.laneState();
     for (;;) {
-      const q = Math.min((times - k) >> 1, BATCH_16);
+      const q = Math.min((times - k) >> 3, BATCH_16);
       if (q === 0) break;
-      k += this.via16Batch(counts, m, threshold, q, units);
+      k += via16Batch(lanes, counts, m, threshold, q, units);
     }
-    if (k < times) counts[units[this.lastIndex16(m, threshold)]]++;
-  }
-
-  private via16Batch(counts: Int32Array, m: number, threshold: number, q: number, units: Int32Array): number {
-    let a = this.a | 0;
-    let b = this.b | 0;
-    let c = this.c | 0;
-    let d = this.d | 0;
-    let k = 0;
-    for (let i = 0; i < q; i++) {
-      b = (b << 25) ^ (b >>> 7) ^ c;
-      c = (c - d) | 0;
-      d = (d << 24) ^ (d >>> 8) ^ a;
-      a = (a - b) | 0;
-      b = (b << 20) ^ (b >>> 12) ^ c;
-      c = (c - d) | 0;
-      d = (d << 16) ^ (c >>> 16) ^ a;
-      a = (a - b) | 0;
-      const x1 = (a >>> 16) * m;
-      const x2 = (a & 0xffff) * m;
-      const g1 = accepted(x1, threshold);
-      const g2 = accepted(x2, threshold);
-      counts[units[x1 >>> 16]] += g1;
-      counts[units[x2 >>> 16]] += g2;
-      k += g1 + g2;
-    }
-    this.a = a;
-    this.b = b;
-    this.c = c;
-    this.d = d;
-    return k;
+    if (k < times) this.lastFew16(counts, m, threshold, times - k, units);
   }
 
   /**
-   * One index when one is left in an addCounts call: the first acceptable 16-bit half of the
-   * next outputs, high half first; the other half of that output is dropped.
+   * The last `need` (< 8 or so) indices of an addCounts call, one at a time in fillIndices'
+   * order; the rest of the last step's indices are dropped.
    */
-  private lastIndex16(m: number, threshold: number): number {
-    for (;;) {
-      const w = this.int32();
-      const x1 = (w >>> 16) * m;
-      if ((x1 & 0xffff) >= threshold) return x1 >>> 16;
-      const x2 = (w & 0xffff) * m;
-      if ((x2 & 0xffff) >= threshold) return x2 >>> 16;
+  private lastFew16(counts: Int32Array, m: number, threshold: number, need: number, units: Int32Array | null): void {
+    const lanes = this.laneState();
+    const w = this.laneOut;
+    while (need > 0) {
+      stepLanes(lanes, w);
+      for (let j = 0; j < 8 && need > 0; j++) {
+        const x = (j & 1 ? w[j >> 1] & 0xffff : w[j >> 1] >>> 16) * m;
+        if ((x & 0xffff) >= threshold) {
+          counts[units === null ? x >>> 16 : units[x >>> 16]]++;
+          need--;
+        }
+      }
     }
   }
 
@@ -323,6 +299,102 @@ function accepted(x: number, threshold: number): number {
 }
 
 export function createRng(seed: string, stream: string): Rng {
-  const prng = seedrandom.tychei(`${seed}\u001f${stream}`, { state: true });
-  return new TycheI(prng.state() as unknown as { a: number; b: number; c: number; d: number });
+  const streamSeed = `${seed}\u001f${stream}`;
+  const prng = seedrandom.tychei(streamSeed, { state: true });
+  return new TycheI(prng.state() as unknown as { a: number; b: number; c: number; d: number }, streamSeed);
+}
+
+/** One Tyche-i step of each lane (state layout as in TycheI.laneState); outputs (the new a) to w. */
+function stepLanes(st: Int32Array, w: Int32Array): void {
+  for (let j = 0; j < LANES; j++) {
+    let a = st[j];
+    let b = st[LANES + j];
+    let c = st[2 * LANES + j];
+    let d = st[3 * LANES + j];
+    b = (b << 25) ^ (b >>> 7) ^ c;
+    c = (c - d) | 0;
+    d = (d << 24) ^ (d >>> 8) ^ a;
+    a = (a - b) | 0;
+    b = (b << 20) ^ (b >>> 12) ^ c;
+    c = (c - d) | 0;
+    d = (d << 16) ^ (c >>> 16) ^ a;
+    a = (a - b) | 0;
+    st[j] = a;
+    st[LANES + j] = b;
+    st[2 * LANES + j] = c;
+    st[3 * LANES + j] = d;
+    w[j] = a;
+  }
+}
+
+/**
+ * q steps of the four lanes, all eight halves of each: draws accepted by Lemire's test land in
+ * counts; returns how many. Branch-free: a rejected half adds 0 to a valid cell (its index
+ * x >>> 16 is below m either way), since with m = 10⁴ about 8% of halves are rejected at
+ * random and a mispredicted branch costs more than the add. The order of the adds does not
+ * matter here (only fillIndices and lastFew16 stop part-way through a step).
+ */
+function direct16Batch(st: Int32Array, counts: Int32Array, m: number, threshold: number, q: number): number {
+  let k = 0;
+  for (let j = 0; j < LANES; j++) {
+    let a = st[j];
+    let b = st[LANES + j];
+    let c = st[2 * LANES + j];
+    let d = st[3 * LANES + j];
+    for (let i = 0; i < q; i++) {
+      b = (b << 25) ^ (b >>> 7) ^ c;
+      c = (c - d) | 0;
+      d = (d << 24) ^ (d >>> 8) ^ a;
+      a = (a - b) | 0;
+      b = (b << 20) ^ (b >>> 12) ^ c;
+      c = (c - d) | 0;
+      d = (d << 16) ^ (c >>> 16) ^ a;
+      a = (a - b) | 0;
+      const x1 = (a >>> 16) * m;
+      const x2 = (a & 0xffff) * m;
+      const g1 = accepted(x1, threshold);
+      const g2 = accepted(x2, threshold);
+      counts[x1 >>> 16] += g1;
+      counts[x2 >>> 16] += g2;
+      k += g1 + g2;
+    }
+    st[j] = a;
+    st[LANES + j] = b;
+    st[2 * LANES + j] = c;
+    st[3 * LANES + j] = d;
+  }
+  return k;
+}
+
+/** As direct16Batch, each index x counted at counts[units[x]]. */
+function via16Batch(st: Int32Array, counts: Int32Array, m: number, threshold: number, q: number, units: Int32Array): number {
+  let k = 0;
+  for (let j = 0; j < LANES; j++) {
+    let a = st[j];
+    let b = st[LANES + j];
+    let c = st[2 * LANES + j];
+    let d = st[3 * LANES + j];
+    for (let i = 0; i < q; i++) {
+      b = (b << 25) ^ (b >>> 7) ^ c;
+      c = (c - d) | 0;
+      d = (d << 24) ^ (d >>> 8) ^ a;
+      a = (a - b) | 0;
+      b = (b << 20) ^ (b >>> 12) ^ c;
+      c = (c - d) | 0;
+      d = (d << 16) ^ (c >>> 16) ^ a;
+      a = (a - b) | 0;
+      const x1 = (a >>> 16) * m;
+      const x2 = (a & 0xffff) * m;
+      const g1 = accepted(x1, threshold);
+      const g2 = accepted(x2, threshold);
+      counts[units[x1 >>> 16]] += g1;
+      counts[units[x2 >>> 16]] += g2;
+      k += g1 + g2;
+    }
+    st[j] = a;
+    st[LANES + j] = b;
+    st[2 * LANES + j] = c;
+    st[3 * LANES + j] = d;
+  }
+  return k;
 }

@@ -10,9 +10,9 @@ import { TALLY16_WASM } from './tally16-wasm';
  */
 
 export interface TallyKernel {
-  /** The generator state a, b, c, d, read and written by the loops. */
+  /** The four lane generators' state (vectors a, b, c, d; TycheI.laneState), read and written by the loops. */
   state: Int32Array;
-  /** q outputs tallied into counts (byte offset); returns how many draws were accepted. */
+  /** q steps of the four lanes (eight candidate indices each) tallied into counts (byte offset); returns how many draws were accepted. */
   direct16(counts: number, m: number, threshold: number, q: number): number;
   /** The same, each index x counted at counts[units[x]] (byte offsets). */
   via16(counts: number, m: number, threshold: number, q: number, units: number): number;
@@ -39,7 +39,7 @@ function tallyModule(): WebAssembly.Module | null {
   return compiled;
 }
 
-const STATE_BYTES = 16;
+const STATE_BYTES = 64;
 const PAGE = 65536;
 
 /**
@@ -65,7 +65,7 @@ export function tallyArena(n: number, unitCells = 0): TallyArena | null {
   }
   const buffer = memory.buffer;
   kernels.set(buffer, {
-    state: new Int32Array(buffer, 0, 4),
+    state: new Int32Array(buffer, 0, STATE_BYTES / 4),
     direct16: (cnt, m, thr, q) => exports.direct16(cnt, m, thr, q, 0),
     via16: (cnt, m, thr, q, units) => exports.via16(cnt, m, thr, q, 0, units),
   });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { createRng } from './rng';
+import { createRng, type Rng } from './rng';
 import { kernelOf, tallyArena } from './tally-kernel';
 import { TALLY16_WASM } from './tally16-wasm';
 
@@ -11,7 +11,7 @@ describe('the WebAssembly tally loops (tally16.wat)', () => {
     expect(Array.from(bytes)).toEqual(Array.from(TALLY16_WASM));
   });
 
-  it('draw exactly what the JavaScript loops draw: the same counts, then the same generator state', () => {
+  it('draw exactly what the JavaScript loops draw: the same counts, then the same generator and lane states', () => {
     for (const m of [1, 2, 7, 1000, 10_000, 65_536]) {
       for (const times of [1, 2, 511, 512, 513, 999, 3000, 10_001]) {
         const arena = tallyArena(m);
@@ -29,6 +29,7 @@ describe('the WebAssembly tally loops (tally16.wat)', () => {
         expect(Array.from(viaWasm)).toEqual(Array.from(viaJs));
         expect(viaJs.reduce((s, c) => s + c, 0)).toBe(2 * times);
         expect(a.int32()).toBe(b.int32());
+        expect(nextIndices(a, m)).toEqual(nextIndices(b, m));
       }
     }
   });
@@ -47,6 +48,14 @@ describe('the WebAssembly tally loops (tally16.wat)', () => {
     }
     expect(Array.from(arena.counts)).toEqual(Array.from(viaJs));
     expect(a.int32()).toBe(b.int32());
+    expect(nextIndices(a, n)).toEqual(nextIndices(b, n));
     expect(() => arena.copy(new Int32Array(1))).toThrow(RangeError);
   });
 });
+
+/** The next 20 indices below m: the lane generators' state after the calls compared. */
+function nextIndices(rng: Rng, m: number): number[] {
+  const out = new Int32Array(20);
+  rng.fillIndices(out, 0, m, 20);
+  return Array.from(out);
+}
