@@ -16,6 +16,10 @@ export interface TallyKernel {
   direct16(counts: number, m: number, threshold: number, q: number): number;
   /** The same, each index x counted at counts[units[x]] (byte offsets). */
   via16(counts: number, m: number, threshold: number, q: number, units: number): number;
+  /** The block's memory (other kernels over its arrays instantiate against it: statistics/count-scan.ts). */
+  memory: WebAssembly.Memory;
+  /** A copy of `values` in the block's free room, or null when there is none left. */
+  place(values: Int32Array): Int32Array | null;
 }
 
 export interface TallyArena {
@@ -44,12 +48,14 @@ const PAGE = 65536;
 
 /**
  * A block for a count array of n cells and up to `unitCells` cells of unit lists, or null when
- * WebAssembly is not available (callers then use a plain Int32Array).
+ * WebAssembly is not available (callers then use a plain Int32Array). It keeps room for 2n + 8
+ * more cells that kernels over the counts may place arrays in (the sorted order a statistic
+ * scans the counts in: statistics/count-scan.ts).
  */
 export function tallyArena(n: number, unitCells = 0): TallyArena | null {
   const mod = tallyModule();
   if (!mod) return null;
-  const bytes = STATE_BYTES + 4 * (n + unitCells);
+  const end = STATE_BYTES + 4 * (n + unitCells + 2 * n + 8);
   let memory: WebAssembly.Memory;
   let exports: {
     direct16(cnt: number, m: number, thr: number, q: number, st: number): number;
@@ -57,27 +63,34 @@ export function tallyArena(n: number, unitCells = 0): TallyArena | null {
   };
   try {
     // The memory never grows: growing would detach the views handed out.
-    memory = new WebAssembly.Memory({ initial: Math.max(1, Math.ceil(bytes / PAGE)) });
+    memory = new WebAssembly.Memory({ initial: Math.max(1, Math.ceil(end / PAGE)) });
     exports = new WebAssembly.Instance(mod, { env: { memory } }).exports as unknown as typeof exports;
   } catch {
     // Each memory reserves address space of its own; should that ever run out, plain arrays do.
     return null;
   }
   const buffer = memory.buffer;
+  let next = STATE_BYTES + 4 * n;
+  const place = (values: Int32Array): Int32Array | null => {
+    if (next + 4 * values.length > end) return null;
+    const view = new Int32Array(buffer, next, values.length);
+    view.set(values);
+    next += 4 * values.length;
+    return view;
+  };
   kernels.set(buffer, {
     state: new Int32Array(buffer, 0, STATE_BYTES / 4),
     direct16: (cnt, m, thr, q) => exports.direct16(cnt, m, thr, q, 0),
     via16: (cnt, m, thr, q, units) => exports.via16(cnt, m, thr, q, 0, units),
+    memory,
+    place,
   });
-  let next = STATE_BYTES + 4 * n;
   return {
     counts: new Int32Array(buffer, STATE_BYTES, n),
     copy(values) {
+      // unit lists first (the caller places them right after making the block)
       if (next + 4 * values.length > STATE_BYTES + 4 * (n + unitCells)) throw new RangeError('tallyArena: no room left for these units');
-      const view = new Int32Array(buffer, next, values.length);
-      view.set(values);
-      next += 4 * values.length;
-      return view;
+      return place(values)!;
     },
   };
 }

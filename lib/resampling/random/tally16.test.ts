@@ -1,16 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { createRng, type Rng } from './rng';
 import { kernelOf, tallyArena } from './tally-kernel';
-import { TALLY16_WASM } from './tally16-wasm';
 
 describe('the WebAssembly tally loops (tally16.wat)', () => {
-  it('tally16-wasm.ts holds exactly what wabt compiles from tally16.wat', async () => {
-    // @ts-expect-error: a plain-JS build script without type declarations
-    const { compileTally16 } = await import('../../../scripts/build-wasm.mjs');
-    const bytes: Buffer = await compileTally16();
-    expect(Array.from(bytes)).toEqual(Array.from(TALLY16_WASM));
-  });
-
   it('draw exactly what the JavaScript loops draw: the same counts, then the same generator and lane states', () => {
     for (const m of [1, 2, 7, 1000, 10_000, 65_536]) {
       for (const times of [1, 2, 511, 512, 513, 999, 3000, 10_001]) {

@@ -1,13 +1,69 @@
+import { kernelOf } from '../random/tally-kernel';
+import { COUNT_SCAN_WASM } from './count-scan-wasm';
+
 /**
  * Order statistics of a resample given as unit counts, read in one pass over the data in
  * sorted order: the resample's expanded ascending sequence has sorted[p] repeated
  * counts[order[p]] times, so the value at (0-based) rank r is the sorted[p] at which the
- * running count first exceeds r. Cost O(n) per call, no allocation.
+ * running count first exceeds r. Cost O(n) per call, no allocation. Counts in a tally arena
+ * (random/tally-kernel.ts) are scanned in WebAssembly (count-scan.wat), others here.
  */
 
 const pair = new Float64Array(2);
 /** Running count through the position scanTo returned. */
 let reached = 0;
+
+/** scanTo in WebAssembly (count-scan.wat), bound to one tally arena's memory. */
+interface Scanner {
+  scan: (counts: number, order: number, r: number, m: number, out: number) => number;
+  /** Where the scan leaves its running count (a cell placed in the arena). */
+  out: Int32Array;
+  /** Each order array's copy in the arena (null: no room left, scanned in JavaScript). */
+  orders: Map<Int32Array, Int32Array | null>;
+}
+
+let scanModule: WebAssembly.Module | null | undefined;
+/** Per count array's buffer: its scanner, or null for counts outside any arena. */
+const scanners = new WeakMap<ArrayBufferLike, Scanner | null>();
+
+function scannerFor(counts: Int32Array): Scanner | null {
+  let s = scanners.get(counts.buffer);
+  if (s === undefined) {
+    s = makeScanner(counts);
+    scanners.set(counts.buffer, s);
+  }
+  return s;
+}
+
+function makeScanner(counts: Int32Array): Scanner | null {
+  const kernel = kernelOf(counts);
+  if (!kernel || scanModule === null) return null;
+  try {
+    scanModule ??= new WebAssembly.Module(COUNT_SCAN_WASM);
+    const scan = new WebAssembly.Instance(scanModule, { env: { memory: kernel.memory } }).exports.scanTo as Scanner['scan'];
+    const out = kernel.place(new Int32Array(1));
+    if (!out) return null;
+    return { scan, out, orders: new Map() };
+  } catch {
+    scanModule = null;
+    return null;
+  }
+}
+
+/** The scan in WebAssembly when counts live in a tally arena with room for `order`; else -1. */
+function scanInWasm(order: Int32Array, counts: Int32Array, r: number, m: number): number {
+  const s = scannerFor(counts);
+  if (!s) return -1;
+  let placed = s.orders.get(order);
+  if (placed === undefined) {
+    placed = kernelOf(counts)!.place(order);
+    s.orders.set(order, placed);
+  }
+  if (!placed) return -1;
+  const p = s.scan(counts.byteOffset, placed.byteOffset, r, m, s.out.byteOffset);
+  reached = s.out[0];
+  return p;
+}
 
 /**
  * First sorted position p whose running count exceeds r (m − 1 when none does; reached =
@@ -15,6 +71,8 @@ let reached = 0;
  * then walked one by one: fewer tests in the loop, the same p (counts are whole numbers).
  */
 function scanTo(order: Int32Array, counts: Int32Array, r: number, m: number): number {
+  const w = scanInWasm(order, counts, r, m);
+  if (w >= 0) return w;
   let cum = 0;
   let p = 0;
   for (const m4 = m - 3; p < m4; p += 4) {

@@ -1,4 +1,5 @@
 import { lowerBound } from './lower-bound';
+import { SORT_POSITIONS_WASM } from './sort-positions-wasm';
 
 /**
  * Sorts units by value once, so order statistics of any resample can be read from counts
@@ -11,9 +12,11 @@ import { lowerBound } from './lower-bound';
  * JavaScript), then each unit, in ascending unit order, takes the next free place among the
  * positions of its value (a binary search for the first one) — the same order as a stable
  * comparison sort by value then unit, without a JavaScript comparator called n·log n times,
- * which on a cold start (code not yet optimized) cost ~15 ms for 10⁴ values. −0 and +0
- * count as equal, as with the comparison a − b. NaN has no place in an order: with one
- * among the values, the comparison sort below is used as it always was.
+ * which on a cold start (code not yet optimized) cost ~15 ms for 10⁴ values; the placing
+ * loops themselves, unoptimized on a cold start, cost ~7 ms more, so from WASM_MIN_KEYS keys
+ * up they run in WebAssembly (placeInWasm). −0 and +0 count as equal, as with the
+ * comparison a − b. NaN has no place in an order: with one among the values, the
+ * comparison sort below is used as it always was.
  */
 export function sortUnits(values: ArrayLike<number>, units?: ArrayLike<number>): { sorted: Float64Array; order: Int32Array } {
   const m = units ? units.length : values.length;
@@ -26,6 +29,11 @@ export function sortUnits(values: ArrayLike<number>, units?: ArrayLike<number>):
     keys[j] = v;
   }
   const ascending = keys.slice().sort();
+  const placed = m >= WASM_MIN_KEYS ? placeInWasm(ascending, keys) : null;
+  if (placed) {
+    if (ids) for (let i = 0; i < m; i++) placed.order[i] = ids[placed.order[i]];
+    return placed;
+  }
   const taken = new Int32Array(m);
   const order = new Int32Array(m);
   for (let j = 0; j < m; j++) {
@@ -35,6 +43,50 @@ export function sortUnits(values: ArrayLike<number>, units?: ArrayLike<number>):
   const sorted = new Float64Array(m);
   for (let i = 0; i < m; i++) sorted[i] = values[order[i]];
   return { sorted, order };
+}
+
+/** From this many keys up the placing loops run in WebAssembly; fewer cost little either way. */
+const WASM_MIN_KEYS = 256;
+let positionsModule: WebAssembly.Module | null | undefined;
+
+/**
+ * The placing loops of sortUnits in WebAssembly (sort-positions.wat): the same order and
+ * values as the loops above (statistics tests compare them), computed in a fresh memory of
+ * 32 bytes per key. Null where WebAssembly is missing or the memory cannot be had; the
+ * JavaScript loops then run. `order` holds key indices (the caller maps them to units).
+ */
+function placeInWasm(ascending: Float64Array, keys: Float64Array): { sorted: Float64Array; order: Int32Array } | null {
+  if (positionsModule === undefined) {
+    try {
+      positionsModule = typeof WebAssembly === 'object' ? new WebAssembly.Module(SORT_POSITIONS_WASM) : null;
+    } catch {
+      positionsModule = null;
+    }
+  }
+  if (!positionsModule) return null;
+  const m = keys.length;
+  let memory: WebAssembly.Memory;
+  let positions: (asc: number, keys: number, m: number, taken: number, order: number, sorted: number) => void;
+  try {
+    const instance = new WebAssembly.Instance(positionsModule);
+    memory = instance.exports.memory as WebAssembly.Memory;
+    positions = instance.exports.positions as typeof positions;
+    const need = 32 * m - memory.buffer.byteLength;
+    if (need > 0) memory.grow(Math.ceil(need / 65536));
+  } catch {
+    return null;
+  }
+  const buffer = memory.buffer;
+  // f64 arrays first (8-byte aligned), then the i32 ones; a new memory is zeroed (taken).
+  const asc = 0;
+  const key = 8 * m;
+  const sorted = 16 * m;
+  const taken = 24 * m;
+  const order = 28 * m;
+  new Float64Array(buffer, asc, m).set(ascending);
+  new Float64Array(buffer, key, m).set(keys);
+  positions(asc, key, m, taken, order, sorted);
+  return { sorted: new Float64Array(buffer, sorted, m).slice(), order: new Int32Array(buffer, order, m).slice() };
 }
 
 /** The same order by a comparison sort: by value, then by unit. */
