@@ -20,7 +20,11 @@ export const WASM_MODULES = [
 /** A module's bytes, as wabt compiles its .wat (path relative to the project root). */
 export async function compileWat(wat) {
   const wabt = await (await import('wabt')).default();
-  const mod = wabt.parseWat(path.basename(wat), readFileSync(path.join(root, wat), 'utf8'));
+  // The file's bytes as an ArrayBuffer of their own: wabt writes a string as ASCII (a non-ASCII
+  // character in a comment keeps only its low byte, which can be a newline), and takes the
+  // whole underlying buffer of a typed array (a pooled Buffer has more than the file in it).
+  const bytes = readFileSync(path.join(root, wat));
+  const mod = wabt.parseWat(path.basename(wat), bytes.buffer.slice(bytes.byteOffset, bytes.byteOffset + bytes.byteLength));
   try {
     mod.validate();
     return Buffer.from(mod.toBinary({}).buffer);

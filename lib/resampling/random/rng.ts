@@ -151,22 +151,16 @@ export class TycheI implements Rng {
   // monomorphic in V8.
 
   /**
-   * addDirect16 / addVia16 run by the WebAssembly loops (tally-kernel.ts) on counts (and units)
-   * in a kernel's memory: the lane state goes through the kernel's memory, and the batches and
-   * the last few indices are as in addDirect16, so the draws are the same.
+   * addDirect16 / addVia16 and their last few indices, run as one WebAssembly call (add16 in
+   * tally16.wat, tally-kernel.ts) on counts (and units) in a kernel's memory: the lane state
+   * goes through the kernel's memory, and the batches and the tail are as in addDirect16, so
+   * the draws are the same.
    */
   private addWasm16(kernel: TallyKernel, counts: Int32Array, m: number, times: number, units: Int32Array | null): void {
     const lanes = this.laneState();
     kernel.state.set(lanes);
-    const threshold = (TWO16 - m) % m;
-    let k = 0;
-    for (;;) {
-      const q = (times - k) >> 3;
-      if (q === 0) break;
-      k += units === null ? kernel.direct16(counts.byteOffset, m, threshold, q) : kernel.via16(counts.byteOffset, m, threshold, q, units.byteOffset);
-    }
+    kernel.add16(counts.byteOffset, m, (TWO16 - m) % m, times, units === null ? null : units.byteOffset);
     lanes.set(kernel.state);
-    if (k < times) this.lastFew16(counts, m, threshold, times - k, units);
   }
 
   /**

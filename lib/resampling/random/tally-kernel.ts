@@ -12,10 +12,11 @@ import { TALLY16_WASM } from './tally16-wasm';
 export interface TallyKernel {
   /** The four lane generators' state (vectors a, b, c, d; TycheI.laneState), read and written by the loops. */
   state: Int32Array;
-  /** q steps of the four lanes (eight candidate indices each) tallied into counts (byte offset); returns how many draws were accepted. */
-  direct16(counts: number, m: number, threshold: number, q: number): number;
-  /** The same, each index x counted at counts[units[x]] (byte offsets). */
-  via16(counts: number, m: number, threshold: number, q: number, units: number): number;
+  /**
+   * A whole addCounts call for m ≤ 2¹⁶: `times` draws below m tallied into counts (byte offset),
+   * each index x at counts[units[x]] when units (a byte offset) is given, else at counts[x].
+   */
+  add16(counts: number, m: number, threshold: number, times: number, units: number | null): void;
   /** The block's memory (other kernels over its arrays instantiate against it: statistics/count-scan.ts). */
   memory: WebAssembly.Memory;
   /** A copy of `values` in the block's free room, or null when there is none left. */
@@ -43,7 +44,9 @@ function tallyModule(): WebAssembly.Module | null {
   return compiled;
 }
 
-const STATE_BYTES = 64;
+/** The lanes' state (four vectors of four i32), then 16 bytes of scratch for the loops' tail. */
+const LANE_STATE_BYTES = 64;
+const STATE_BYTES = LANE_STATE_BYTES + 16;
 const PAGE = 65536;
 
 /**
@@ -58,8 +61,7 @@ export function tallyArena(n: number, unitCells = 0): TallyArena | null {
   const end = STATE_BYTES + 4 * (n + unitCells + 2 * n + 8);
   let memory: WebAssembly.Memory;
   let exports: {
-    direct16(cnt: number, m: number, thr: number, q: number, st: number): number;
-    via16(cnt: number, m: number, thr: number, q: number, st: number, units: number): number;
+    add16(cnt: number, m: number, thr: number, times: number, st: number, units: number, via: number): void;
   };
   try {
     // The memory never grows: growing would detach the views handed out.
@@ -79,9 +81,8 @@ export function tallyArena(n: number, unitCells = 0): TallyArena | null {
     return view;
   };
   kernels.set(buffer, {
-    state: new Int32Array(buffer, 0, STATE_BYTES / 4),
-    direct16: (cnt, m, thr, q) => exports.direct16(cnt, m, thr, q, 0),
-    via16: (cnt, m, thr, q, units) => exports.via16(cnt, m, thr, q, 0, units),
+    state: new Int32Array(buffer, 0, LANE_STATE_BYTES / 4),
+    add16: (cnt, m, thr, times, units) => exports.add16(cnt, m, thr, times, 0, units ?? 0, units === null ? 0 : 1),
     memory,
     place,
   });

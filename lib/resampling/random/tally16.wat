@@ -9,15 +9,19 @@
 ;; WebAssembly because it is compiled before the first call instead of being optimized part-way
 ;; through it, and because JavaScript has no SIMD.
 ;;
+;; add16 is a whole addCounts call (TycheI.addDirect16 / addVia16 and lastFew16 in rng.ts): the
+;; batches of whole steps, then the last few indices one at a time, so a replicate's draws are
+;; one call from JavaScript instead of a handful plus a JavaScript tail.
+;;
 ;; Memory (imported, one block per count array, tally-kernel.ts): the four generators' state as
-;; four vectors a, b, c, d (lane j of each = generator j) at byte offset $st (64 bytes), the
-;; counts as i32 at $cnt, the units (via16) as i32 at $units.
+;; four vectors a, b, c, d (lane j of each = generator j) at byte offset $st (64 bytes) and 16
+;; bytes of scratch after it, the counts as i32 at $cnt, the units (via16) as i32 at $units.
 ;; Built into tally16-wasm.ts by scripts/build-wasm.mjs (wabt).
 (module
   (import "env" "memory" (memory 1))
 
   ;; counts[x] += 1 for each accepted index x; returns how many were accepted.
-  (func (export "direct16") (param $cnt i32) (param $m i32) (param $thr i32) (param $q i32) (param $st i32) (result i32)
+  (func $direct16 (export "direct16") (param $cnt i32) (param $m i32) (param $thr i32) (param $q i32) (param $st i32) (result i32)
     (local $a v128) (local $b v128) (local $c v128) (local $d v128)
     (local $xh v128) (local $xl v128) (local $gh v128) (local $gl v128)
     (local $mv v128) (local $tv v128) (local $low v128)
@@ -89,7 +93,7 @@
     (local.get $k))
 
   ;; The same draws, each index x counted at counts[units[x]].
-  (func (export "via16") (param $cnt i32) (param $m i32) (param $thr i32) (param $q i32) (param $st i32) (param $units i32) (result i32)
+  (func $via16 (export "via16") (param $cnt i32) (param $m i32) (param $thr i32) (param $q i32) (param $st i32) (param $units i32) (result i32)
     (local $a v128) (local $b v128) (local $c v128) (local $d v128)
     (local $xh v128) (local $xl v128) (local $gh v128) (local $gl v128)
     (local $mv v128) (local $tv v128) (local $low v128)
@@ -159,4 +163,67 @@
     (v128.store offset=32 (local.get $st) (local.get $c))
     (v128.store offset=48 (local.get $st) (local.get $d))
     (local.get $k))
+
+  ;; times draws below m into counts (through units when $via is 1): batches of
+  ;; q = ⌊(times − k)/8⌋ whole steps while q > 0, then the tail.
+  (func (export "add16") (param $cnt i32) (param $m i32) (param $thr i32) (param $times i32) (param $st i32) (param $units i32) (param $via i32)
+    (local $k i32) (local $q i32)
+    (block $batched
+      (loop $batch
+        (local.set $q (i32.shr_u (i32.sub (local.get $times) (local.get $k)) (i32.const 3)))
+        (br_if $batched (i32.eqz (local.get $q)))
+        (local.set $k (i32.add (local.get $k)
+          (if (result i32) (local.get $via)
+            (then (call $via16 (local.get $cnt) (local.get $m) (local.get $thr) (local.get $q) (local.get $st) (local.get $units)))
+            (else (call $direct16 (local.get $cnt) (local.get $m) (local.get $thr) (local.get $q) (local.get $st))))))
+        (br $batch)))
+    (if (i32.lt_u (local.get $k) (local.get $times))
+      (then (call $tail (local.get $cnt) (local.get $m) (local.get $thr) (i32.sub (local.get $times) (local.get $k)) (local.get $st) (local.get $units) (local.get $via)))))
+
+  ;; The last `need` indices one at a time (rng.ts, lastFew16): step the lanes, then the eight
+  ;; candidates in order (lane 0 high half, lane 0 low half, lane 1 high half, …), counting the
+  ;; accepted ones until none is needed; the rest of that step is dropped.
+  (func $tail (param $cnt i32) (param $m i32) (param $thr i32) (param $need i32) (param $st i32) (param $units i32) (param $via i32)
+    (local $a v128) (local $b v128) (local $c v128) (local $d v128)
+    (local $j i32) (local $w i32) (local $x i32) (local $i i32) (local $p i32)
+    (local.set $a (v128.load offset=0 (local.get $st)))
+    (local.set $b (v128.load offset=16 (local.get $st)))
+    (local.set $c (v128.load offset=32 (local.get $st)))
+    (local.set $d (v128.load offset=48 (local.get $st)))
+    (block $done
+      (loop $step
+        (br_if $done (i32.eqz (local.get $need)))
+        (local.set $b (v128.xor (v128.or (i32x4.shl (local.get $b) (i32.const 25)) (i32x4.shr_u (local.get $b) (i32.const 7))) (local.get $c)))
+        (local.set $c (i32x4.sub (local.get $c) (local.get $d)))
+        (local.set $d (v128.xor (v128.or (i32x4.shl (local.get $d) (i32.const 24)) (i32x4.shr_u (local.get $d) (i32.const 8))) (local.get $a)))
+        (local.set $a (i32x4.sub (local.get $a) (local.get $b)))
+        (local.set $b (v128.xor (v128.or (i32x4.shl (local.get $b) (i32.const 20)) (i32x4.shr_u (local.get $b) (i32.const 12))) (local.get $c)))
+        (local.set $c (i32x4.sub (local.get $c) (local.get $d)))
+        (local.set $d (v128.xor (v128.xor (i32x4.shl (local.get $d) (i32.const 16)) (i32x4.shr_u (local.get $c) (i32.const 16))) (local.get $a)))
+        (local.set $a (i32x4.sub (local.get $a) (local.get $b)))
+        ;; the four outputs to the scratch cells, read back one by one
+        (v128.store offset=64 (local.get $st) (local.get $a))
+        (local.set $j (i32.const 0))
+        (block $stepped
+          (loop $candidate
+            (br_if $stepped (i32.or (i32.eqz (local.get $need)) (i32.ge_u (local.get $j) (i32.const 8))))
+            (local.set $w (i32.load offset=64 (i32.add (local.get $st) (i32.shl (i32.shr_u (local.get $j) (i32.const 1)) (i32.const 2)))))
+            (local.set $x (i32.mul
+              (select (i32.and (local.get $w) (i32.const 0xffff)) (i32.shr_u (local.get $w) (i32.const 16)) (i32.and (local.get $j) (i32.const 1)))
+              (local.get $m)))
+            (if (i32.ge_u (i32.and (local.get $x) (i32.const 0xffff)) (local.get $thr))
+              (then
+                (local.set $i (i32.shr_u (local.get $x) (i32.const 16)))
+                (if (local.get $via)
+                  (then (local.set $i (i32.load (i32.add (local.get $units) (i32.shl (local.get $i) (i32.const 2)))))))
+                (local.set $p (i32.add (local.get $cnt) (i32.shl (local.get $i) (i32.const 2))))
+                (i32.store (local.get $p) (i32.add (i32.load (local.get $p)) (i32.const 1)))
+                (local.set $need (i32.sub (local.get $need) (i32.const 1)))))
+            (local.set $j (i32.add (local.get $j) (i32.const 1)))
+            (br $candidate)))
+        (br $step)))
+    (v128.store offset=0 (local.get $st) (local.get $a))
+    (v128.store offset=16 (local.get $st) (local.get $b))
+    (v128.store offset=32 (local.get $st) (local.get $c))
+    (v128.store offset=48 (local.get $st) (local.get $d)))
 )
