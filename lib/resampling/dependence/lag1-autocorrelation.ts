@@ -1,3 +1,4 @@
+import { loadSeries } from '../math/series';
 import { seriesMean } from './series-mean';
 
 /**
@@ -24,14 +25,19 @@ export function lag1Autocorrelation(x: ArrayLike<number>): number | null {
   const mean = seriesMean(x);
   let s0 = 0;
   let s1 = 0;
-  let here = x[0] - mean;
-  for (let t = 0; t < n - 1; t++) {
-    const next = x[t + 1] - mean;
+  // In WebAssembly from SERIES_WASM_MIN values up (math/series.ts): the same sums.
+  const w = loadSeries(x);
+  if (w) [s0, s1] = w.lag1Sums(mean);
+  else {
+    let here = x[0] - mean;
+    for (let t = 0; t < n - 1; t++) {
+      const next = x[t + 1] - mean;
+      s0 += here * here;
+      s1 += here * next;
+      here = next;
+    }
     s0 += here * here;
-    s1 += here * next;
-    here = next;
   }
-  s0 += here * here;
   const c0 = s0 / n;
   const c1 = s1 / n;
   if (!(c0 > 0)) return null;

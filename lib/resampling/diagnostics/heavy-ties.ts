@@ -1,3 +1,4 @@
+import { loadSeries } from '../math/series';
 import type { Diagnostic } from './types';
 
 /**
@@ -16,7 +17,10 @@ export const heavyTies: Diagnostic = ({ problem }) => {
     const sorted = Float64Array.from(values).sort();
     let distinct = 0;
     let top = 0;
-    for (let i = 0; i < n; ) {
+    // The pass in WebAssembly from SERIES_WASM_MIN values up (math/series.ts): the same runs.
+    const w = loadSeries(sorted);
+    if (w) [distinct, top] = w.runs();
+    else for (let i = 0; i < n; ) {
       const v = sorted[i];
       let j = i + 1;
       while (j < n && (sorted[j] === v || (sorted[j] !== sorted[j] && v !== v))) j++;

@@ -1,5 +1,6 @@
 import { normalCdf } from '../math/normal-cdf';
 import { normalQuantile } from '../math/normal-quantile';
+import { lowerBound, upperBound } from '../statistics/lower-bound';
 import { quantileMonteCarloError } from '../montecarlo/quantile-error';
 import { orderStatisticQuantile, usesExtremeOrderStatistic } from './order-statistic';
 import { type IntervalInput, type IntervalOutcome, tails } from './types';
@@ -41,13 +42,10 @@ export function bcaInterval(input: IntervalInput): IntervalOutcome | null {
  * scipy.stats.bootstrap does.) Null when p is 0 or 1 (every replicate on one side).
  */
 export function biasCorrection(sorted: Float64Array, estimate: number): number | null {
-  let below = 0;
-  let equal = 0;
-  for (let i = 0; i < sorted.length; i++) {
-    if (sorted[i] < estimate) below++;
-    else if (sorted[i] === estimate) equal++;
-    else break;
-  }
+  // Replicates below the estimate and equal to it, by two binary searches in the sorted
+  // replicates (a scan up to the estimate cost a few ms per 10⁴ on a cold start).
+  const below = lowerBound(sorted, estimate);
+  const equal = upperBound(sorted, estimate) - below;
   const p = (below + 0.5 * equal) / sorted.length;
   if (p <= 0 || p >= 1) return null;
   return normalQuantile(p);

@@ -1,3 +1,5 @@
+import { loadSeries } from './series';
+
 /**
  * Sample moments of a set of replicates (or any numbers), computed in two passes for
  * accuracy (the mean first, then central sums).
@@ -26,19 +28,25 @@ export interface Moments {
 export function moments(x: ArrayLike<number>): Moments {
   const B = x.length;
   const shift = B > 0 ? x[0] : 0;
+  // Both passes in WebAssembly from SERIES_WASM_MIN values up (series.ts): the same sums.
+  const w = loadSeries(x);
   let s = 0;
-  for (let i = 0; i < B; i++) s += x[i] - shift;
+  if (w) s = w.shiftedSum(shift);
+  else for (let i = 0; i < B; i++) s += x[i] - shift;
   const meanShifted = s / B;
   const mean = shift + meanShifted;
   let m2 = 0;
   let m3 = 0;
   let m4 = 0;
-  for (let i = 0; i < B; i++) {
-    const d = x[i] - shift - meanShifted;
-    const d2 = d * d;
-    m2 += d2;
-    m3 += d2 * d;
-    m4 += d2 * d2;
+  if (w) [m2, m3, m4] = w.centralSums(shift, meanShifted);
+  else {
+    for (let i = 0; i < B; i++) {
+      const d = x[i] - shift - meanShifted;
+      const d2 = d * d;
+      m2 += d2;
+      m3 += d2 * d;
+      m4 += d2 * d2;
+    }
   }
   const variance = B > 1 ? m2 / (B - 1) : Number.NaN;
   m2 /= B;
