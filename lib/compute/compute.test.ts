@@ -132,6 +132,28 @@ describe('command line', () => {
     expect(JSON.parse(bad.stdout).error).toMatchObject({ code: 'invalid:request', path: 'statistic.column' });
   }, 120_000);
 
+  it('a large request from a file gets the worker the launcher started before loading the engine (one worker, same response)', async () => {
+    const file = path.join(tmpdir(), `margin-cli-early-${process.pid}.json`);
+    writeFileSync(file, JSON.stringify(big));
+    const traced = await new Promise<{ stdout: string; stderr: string }>((resolve, reject) => {
+      execFile(process.execPath, [path.join(root, 'scripts/compute.mjs'), file], { cwd: root, env: { ...process.env, MARGIN_TRACE: '1' }, maxBuffer: 64 * 1024 * 1024 }, (err, stdout, stderr) =>
+        err ? reject(err) : resolve({ stdout, stderr }),
+      );
+    });
+    expect(traced.stdout.trim()).toBe(JSON.stringify(runRequest(big)));
+    const marks = traced.stderr.split('\n');
+    expect(marks.filter((l) => l.startsWith('launcher:early-worker '))).toHaveLength(1);
+    // adopted by the pool: no second worker was started
+    expect(marks.filter((l) => l.startsWith('worker:loaded '))).toHaveLength(1);
+    // a small request starts none
+    const small = path.join(tmpdir(), `margin-cli-small-${process.pid}.json`);
+    writeFileSync(small, JSON.stringify({ ...big, B: 100 }));
+    const quiet = await new Promise<string>((resolve, reject) => {
+      execFile(process.execPath, [path.join(root, 'scripts/compute.mjs'), small], { cwd: root, env: { ...process.env, MARGIN_TRACE: '1' } }, (err, _stdout, stderr) => (err ? reject(err) : resolve(stderr)));
+    });
+    expect(quiet).not.toContain('launcher:early-worker');
+  }, 120_000);
+
   it('exits non-zero with a JSON error on bad input', async () => {
     const bad = await cli(['-'], '{"data": {"x": [1, 2, "three"]}, "statistic": {"name": "mean", "column": "x"}}');
     expect(bad.code).toBe(1);

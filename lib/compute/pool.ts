@@ -3,6 +3,7 @@ import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
 import type { EngineRequest } from '@/lib/resampling';
 import { EngineError } from '@/lib/resampling/errors';
+import { takeEarlyWorker } from './early-worker.mjs';
 import { CLAIMED, FINISHED, type FromWorker, type JobBuffers, type ToWorker } from './protocol';
 import { traced } from './trace';
 
@@ -181,8 +182,10 @@ export class EnginePool {
   }
 
   private spawn(): Slot {
-    const worker = new Worker(this.file);
-    const slot: Slot = { worker, isReady: false, job: null };
+    // The command line's launcher may have started one already (early-worker.mjs).
+    const early = takeEarlyWorker(this.file);
+    const worker = early?.worker ?? new Worker(this.file);
+    const slot: Slot = { worker, isReady: early?.isReady() ?? false, job: null };
     worker.unref();
     worker.on('message', (msg: FromWorker) => {
       if (msg.type === 'ready') slot.isReady = true;

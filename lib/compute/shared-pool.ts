@@ -8,8 +8,7 @@ import { EnginePool } from './pool';
  * line can start the workers before it loads the engine itself.
  */
 
-/** Below this many index draws a job runs on the calling thread (starting workers would cost more). */
-export const INLINE_DRAWS = 2_000_000;
+export { INLINE_DRAWS, looksLarge } from './early-worker.mjs';
 
 let pool: EnginePool | null = null;
 let poolFile: string | null = null;
@@ -51,18 +50,4 @@ export function prewarmCompute(threads: number): void {
 /** The pool, if prewarmCompute started it with this many workers; else null. */
 export function warmPoolFor(threads: number): EnginePool | null {
   return pool && pool.size === threads && poolFile === process.env.MARGIN_ENGINE_WORKER ? pool : null;
-}
-
-/**
- * A cheap guess, before validation, whether a request will go to worker threads: B times
- * the longest data column against INLINE_DRAWS. Only decides whether to start workers
- * early; compute() decides from the prepared request.
- */
-export function looksLarge(input: unknown): boolean {
-  if (!input || typeof input !== 'object') return false;
-  const { B, data } = input as { B?: unknown; data?: unknown };
-  if (typeof B !== 'number' || !data || typeof data !== 'object') return false;
-  let n = 0;
-  for (const column of Object.values(data)) if (Array.isArray(column)) n = Math.max(n, column.length);
-  return n * B >= INLINE_DRAWS;
 }

@@ -1,0 +1,80 @@
+// Starting the engine's worker thread as early as possible on the command line. A worker
+// thread takes ~50–80 ms to start here (Node's own start-up in the new thread, then the worker
+// bundle), and on the benchmark request the main thread is drawing replicates ~55 ms after the
+// engine bundle starts; a worker started by the bundle joined late and drew only a few chunks.
+// So the launcher (scripts/compute.mjs) starts it first thing, before it checks that the
+// bundles are fresh and loads the engine, when the request file looks large; the pool
+// (pool.ts) adopts it as its first worker. Plain JavaScript because the launcher runs it
+// before anything is built; shared-pool.ts takes INLINE_DRAWS and looksLarge from here too.
+import { readFileSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
+import { Worker } from 'node:worker_threads';
+
+/** Below this many index draws a job runs on the calling thread (starting workers would cost more). */
+export const INLINE_DRAWS = 2_000_000;
+
+/**
+ * A cheap guess, before validation, whether a request will go to worker threads: B times
+ * the longest data column against INLINE_DRAWS. Only decides whether to start workers
+ * early; compute() decides from the prepared request.
+ */
+export function looksLarge(input) {
+  if (!input || typeof input !== 'object') return false;
+  const { B, data } = input;
+  if (typeof B !== 'number' || !data || typeof data !== 'object') return false;
+  let n = 0;
+  for (const column of Object.values(data)) if (Array.isArray(column)) n = Math.max(n, column.length);
+  return n * B >= INLINE_DRAWS;
+}
+
+// The launcher and the engine bundle share no module instance: the worker waits here.
+const KEY = Symbol.for('margin.engine.earlyWorker');
+
+/**
+ * The launcher: when the command line's request file (not standard input) parses and looks
+ * large, and it is not run with `--threads 0`, starts a worker on `workerFile`. Anything
+ * unusual — an unreadable file, broken JSON, one core — starts nothing: the command line then
+ * reads the request itself and reports what is wrong, as before.
+ */
+export function startEarlyWorker(argv, workerFile) {
+  let file = null;
+  for (let i = 0; i < argv.length; i++) {
+    if (argv[i] === '--threads') {
+      if (argv[++i] === '0') return;
+    } else if (!argv[i].startsWith('--') && file === null) file = argv[i];
+  }
+  if (file === null || file === '-' || availableParallelism() < 2) return;
+  let input;
+  try {
+    input = JSON.parse(readFileSync(file, 'utf8'));
+  } catch {
+    return;
+  }
+  if (!looksLarge(input)) return;
+  const worker = new Worker(workerFile);
+  worker.unref();
+  let ready = false;
+  worker.on('message', (m) => {
+    if (m && m.type === 'ready') ready = true;
+  });
+  // Until the pool adopts it (it then listens too); unadopted, it only ends with the process.
+  worker.on('error', () => {});
+  globalThis[KEY] = { file: workerFile, worker, isReady: () => ready };
+  // A phase mark as lib/compute/trace.ts writes them (MARGIN_TRACE=1).
+  if (process.env.MARGIN_TRACE === '1') process.stderr.write(`launcher:early-worker ${(performance.timeOrigin + performance.now()).toFixed(1)}\n`);
+}
+
+/** The launcher: the worker bundle is not the one the early worker runs (it was rebuilt). */
+export function dropEarlyWorker() {
+  const early = globalThis[KEY];
+  globalThis[KEY] = undefined;
+  if (early) void early.worker.terminate();
+}
+
+/** The pool: the early worker when it runs this worker bundle (once), else null. */
+export function takeEarlyWorker(file) {
+  const early = globalThis[KEY];
+  if (!early || early.file !== file) return null;
+  globalThis[KEY] = undefined;
+  return early;
+}
