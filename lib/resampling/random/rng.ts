@@ -111,19 +111,120 @@ export class TycheI implements Rng {
   }
 
   fillIndices(out: Int32Array, offset: number, m: number, times: number): void {
-    // The reference path: one index at a time, in the order the fast loops below use.
+    // The reference path: one index at a time, in the order the fast loops below use (the
+    // four lanes in local variables, each step's eight candidates written out in order).
     if (m <= SMALL_M) {
+      if (times <= 0) return;
       const threshold = (TWO16 - m) % m;
-      const lanes = this.laneState();
-      const w = this.laneOut;
+      const st = this.laneState();
+      let a0 = st[0];
+      let a1 = st[1];
+      let a2 = st[2];
+      let a3 = st[3];
+      let b0 = st[4];
+      let b1 = st[5];
+      let b2 = st[6];
+      let b3 = st[7];
+      let c0 = st[8];
+      let c1 = st[9];
+      let c2 = st[10];
+      let c3 = st[11];
+      let d0 = st[12];
+      let d1 = st[13];
+      let d2 = st[14];
+      let d3 = st[15];
       let k = 0;
-      while (k < times) {
-        stepLanes(lanes, w);
-        for (let j = 0; j < 8 && k < times; j++) {
-          const x = (j & 1 ? w[j >> 1] & 0xffff : w[j >> 1] >>> 16) * m;
-          if ((x & 0xffff) >= threshold) out[offset + k++] = x >>> 16;
-        }
+      let x = 0;
+      for (;;) {
+      b0 = (b0 << 25) ^ (b0 >>> 7) ^ c0;
+      c0 = (c0 - d0) | 0;
+      d0 = (d0 << 24) ^ (d0 >>> 8) ^ a0;
+      a0 = (a0 - b0) | 0;
+      b0 = (b0 << 20) ^ (b0 >>> 12) ^ c0;
+      c0 = (c0 - d0) | 0;
+      d0 = (d0 << 16) ^ (c0 >>> 16) ^ a0;
+      a0 = (a0 - b0) | 0;
+      b1 = (b1 << 25) ^ (b1 >>> 7) ^ c1;
+      c1 = (c1 - d1) | 0;
+      d1 = (d1 << 24) ^ (d1 >>> 8) ^ a1;
+      a1 = (a1 - b1) | 0;
+      b1 = (b1 << 20) ^ (b1 >>> 12) ^ c1;
+      c1 = (c1 - d1) | 0;
+      d1 = (d1 << 16) ^ (c1 >>> 16) ^ a1;
+      a1 = (a1 - b1) | 0;
+      b2 = (b2 << 25) ^ (b2 >>> 7) ^ c2;
+      c2 = (c2 - d2) | 0;
+      d2 = (d2 << 24) ^ (d2 >>> 8) ^ a2;
+      a2 = (a2 - b2) | 0;
+      b2 = (b2 << 20) ^ (b2 >>> 12) ^ c2;
+      c2 = (c2 - d2) | 0;
+      d2 = (d2 << 16) ^ (c2 >>> 16) ^ a2;
+      a2 = (a2 - b2) | 0;
+      b3 = (b3 << 25) ^ (b3 >>> 7) ^ c3;
+      c3 = (c3 - d3) | 0;
+      d3 = (d3 << 24) ^ (d3 >>> 8) ^ a3;
+      a3 = (a3 - b3) | 0;
+      b3 = (b3 << 20) ^ (b3 >>> 12) ^ c3;
+      c3 = (c3 - d3) | 0;
+      d3 = (d3 << 16) ^ (c3 >>> 16) ^ a3;
+      a3 = (a3 - b3) | 0;
+      x = (a0 >>> 16) * m;
+      if ((x & 0xffff) >= threshold) {
+        out[offset + k++] = x >>> 16;
+        if (k === times) break;
       }
+      x = (a0 & 0xffff) * m;
+      if ((x & 0xffff) >= threshold) {
+        out[offset + k++] = x >>> 16;
+        if (k === times) break;
+      }
+      x = (a1 >>> 16) * m;
+      if ((x & 0xffff) >= threshold) {
+        out[offset + k++] = x >>> 16;
+        if (k === times) break;
+      }
+      x = (a1 & 0xffff) * m;
+      if ((x & 0xffff) >= threshold) {
+        out[offset + k++] = x >>> 16;
+        if (k === times) break;
+      }
+      x = (a2 >>> 16) * m;
+      if ((x & 0xffff) >= threshold) {
+        out[offset + k++] = x >>> 16;
+        if (k === times) break;
+      }
+      x = (a2 & 0xffff) * m;
+      if ((x & 0xffff) >= threshold) {
+        out[offset + k++] = x >>> 16;
+        if (k === times) break;
+      }
+      x = (a3 >>> 16) * m;
+      if ((x & 0xffff) >= threshold) {
+        out[offset + k++] = x >>> 16;
+        if (k === times) break;
+      }
+      x = (a3 & 0xffff) * m;
+      if ((x & 0xffff) >= threshold) {
+        out[offset + k++] = x >>> 16;
+        if (k === times) break;
+      }
+      }
+      st[0] = a0;
+      st[1] = a1;
+      st[2] = a2;
+      st[3] = a3;
+      st[4] = b0;
+      st[5] = b1;
+      st[6] = b2;
+      st[7] = b3;
+      st[8] = c0;
+      st[9] = c1;
+      st[10] = c2;
+      st[11] = c3;
+      st[12] = d0;
+      st[13] = d1;
+      st[14] = d2;
+      st[15] = d3;
       return;
     }
     for (let k = 0; k < times; k++) out[offset + k] = uniformIndex32(this, m);
