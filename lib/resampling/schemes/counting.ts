@@ -15,7 +15,10 @@ const WASM_MIN_UNITS = 256;
  */
 export function countingScheme(statistic: PreparedStatistic, strata: Int32Array[], description: string, plainResampling: boolean): PreparedScheme {
   const n = statistic.n;
-  const single = strata.length === 1 && isIdentity(strata[0]);
+  // Each stratum lists its units in ascending order (the callers build them so: all units, or
+  // strataFromKeys), so one stratum of n units is every unit in order — no pass over it to check
+  // (a pass over 10⁴ units was hot enough on a cold start for V8 to compile it, in each thread).
+  const single = strata.length === 1 && strata[0].length === n;
   // Counts (and, with strata, the unit lists the draws go through) in WebAssembly memory, where
   // the generator's tally loop runs in WebAssembly (random/tally-kernel.ts); plain arrays
   // without it. The same draws either way. Small samples stay in JavaScript: for them a call
@@ -59,12 +62,7 @@ export function countingScheme(statistic: PreparedStatistic, strata: Int32Array[
   };
 }
 
-function isIdentity(units: Int32Array): boolean {
-  for (let i = 0; i < units.length; i++) if (units[i] !== i) return false;
-  return true;
-}
-
-/** Splits units into strata by a key per unit (first appearance order). */
+/** Splits units into strata by a key per unit (strata in first appearance order, units ascending in each). */
 export function strataFromKeys(keys: ArrayLike<string | number>): Int32Array[] {
   const map = new Map<string | number, number[]>();
   for (let i = 0; i < keys.length; i++) {
