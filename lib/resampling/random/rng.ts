@@ -18,6 +18,12 @@ export interface Rng {
   addCounts(counts: Int32Array, m: number, times: number, units: Int32Array | null): void;
   /** Writes the same `times` indices addCounts would draw into out[offset…], in draw order. */
   fillIndices(out: Int32Array, offset: number, m: number, times: number): void;
+  /**
+   * Runs f with the state of the generators that draw indices below 2¹⁶ copied into `state`
+   * (16 int32: a, b, c, d of the four lanes, as tally16.wat reads them) and copied back after,
+   * for WebAssembly loops that draw as addCounts does (count-scan.ts).
+   */
+  withLanes(state: Int32Array, f: () => void): void;
 }
 
 /**
@@ -258,10 +264,14 @@ export class TycheI implements Rng {
    * the draws are the same.
    */
   private addWasm16(kernel: TallyKernel, counts: Int32Array, m: number, times: number, units: Int32Array | null): void {
+    this.withLanes(kernel.state, () => kernel.add16(counts.byteOffset, m, (TWO16 - m) % m, times, units === null ? null : units.byteOffset));
+  }
+
+  withLanes(state: Int32Array, f: () => void): void {
     const lanes = this.laneState();
-    kernel.state.set(lanes);
-    kernel.add16(counts.byteOffset, m, (TWO16 - m) % m, times, units === null ? null : units.byteOffset);
-    lanes.set(kernel.state);
+    state.set(lanes);
+    f();
+    lanes.set(state);
   }
 
   /**

@@ -19,8 +19,12 @@ export interface TallyKernel {
   add16(counts: number, m: number, threshold: number, times: number, units: number | null): void;
   /** The block's memory (other kernels over its arrays instantiate against it: statistics/count-scan.ts). */
   memory: WebAssembly.Memory;
+  /** tally16.wat's add16 itself, for other modules to import (count-scan.wat). */
+  add16Export: WebAssembly.ImportValue;
   /** A copy of `values` in the block's free room, or null when there is none left. */
   place(values: Int32Array): Int32Array | null;
+  /** The same for doubles (8-byte aligned). */
+  placeDoubles(values: Float64Array): Float64Array | null;
 }
 
 export interface TallyArena {
@@ -48,17 +52,20 @@ function tallyModule(): WebAssembly.Module | null {
 const LANE_STATE_BYTES = 64;
 const STATE_BYTES = LANE_STATE_BYTES + 16;
 const PAGE = 65536;
+const SPARE_PER_UNIT = 4;
+const SPARE_FIXED = 2048;
 
 /**
  * A block for a count array of n cells and up to `unitCells` cells of unit lists, or null when
- * WebAssembly is not available (callers then use a plain Int32Array). It keeps room for 2n + 8
- * more cells that kernels over the counts may place arrays in (the sorted order a statistic
- * scans the counts in: statistics/count-scan.ts).
+ * WebAssembly is not available (callers then use a plain Int32Array). It keeps room for
+ * SPARE_PER_UNIT·n + SPARE_FIXED more cells that kernels over the counts may place arrays in
+ * (statistics/count-scan.ts: the sorted order a statistic scans the counts in, the sorted
+ * values, a chunk of replicates).
  */
 export function tallyArena(n: number, unitCells = 0): TallyArena | null {
   const mod = tallyModule();
   if (!mod) return null;
-  const end = STATE_BYTES + 4 * (n + unitCells + 2 * n + 8);
+  const end = STATE_BYTES + 4 * (n + unitCells + SPARE_PER_UNIT * n + SPARE_FIXED);
   let memory: WebAssembly.Memory;
   let exports: {
     add16(cnt: number, m: number, thr: number, times: number, st: number, units: number, via: number): void;
@@ -80,11 +87,21 @@ export function tallyArena(n: number, unitCells = 0): TallyArena | null {
     next += 4 * values.length;
     return view;
   };
+  const placeDoubles = (values: Float64Array): Float64Array | null => {
+    const at = (next + 7) & ~7;
+    if (at + 8 * values.length > end) return null;
+    const view = new Float64Array(buffer, at, values.length);
+    view.set(values);
+    next = at + 8 * values.length;
+    return view;
+  };
   kernels.set(buffer, {
     state: new Int32Array(buffer, 0, LANE_STATE_BYTES / 4),
     add16: (cnt, m, thr, times, units) => exports.add16(cnt, m, thr, times, 0, units ?? 0, units === null ? 0 : 1),
     memory,
+    add16Export: exports.add16,
     place,
+    placeDoubles,
   });
   return {
     counts: new Int32Array(buffer, STATE_BYTES, n),

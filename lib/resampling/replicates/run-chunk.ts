@@ -45,6 +45,7 @@ function drawChunk(problem: Problem, k: number, theta: Float64Array, innerSe: Fl
   const rng = createRng(seed, `chunk:${k}`);
   const scheme = problem.scheme;
   if (!needsInnerSe(problem)) {
+    if (scheme.replicateMany?.(rng, theta, offset, count)) return;
     for (let b = 0; b < count; b++) theta[offset + b] = scheme.replicate(rng);
     return;
   }

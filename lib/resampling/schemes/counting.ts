@@ -1,5 +1,7 @@
 import type { Rng } from '../random/rng';
 import { tallyArena } from '../random/tally-kernel';
+import { CHUNK_SIZE } from '../replicates/chunks';
+import { orderChunkRunner } from '../statistics/count-scan';
 import type { PreparedStatistic } from '../statistics/types';
 import type { CountingScheme, PreparedScheme } from './types';
 
@@ -51,6 +53,8 @@ export function countingScheme(statistic: PreparedStatistic, strata: Int32Array[
   }
 
   const counting: CountingScheme = { strata, counts, fillCounts, drawIndices };
+  // A median or quantile of all n units: whole chunks in WebAssembly, the same values.
+  const many = single && arena && statistic.countsQuantile ? orderChunkRunner(counts, statistic.countsQuantile, CHUNK_SIZE) : null;
   return {
     description,
     plainResampling,
@@ -59,6 +63,7 @@ export function countingScheme(statistic: PreparedStatistic, strata: Int32Array[
       fillCounts(rng, counts);
       return statistic.fromCounts(counts, n);
     },
+    ...(many ? { replicateMany: many } : {}),
   };
 }
 

@@ -46,6 +46,12 @@ export interface PreparedScheme {
   /** Words for the methods paragraph, e.g. "ordinary bootstrap (resampling rows)". */
   readonly description: string;
   replicate(rng: Rng): number;
+  /**
+   * `count` replicates at once into theta[offset…], the same values as `count` calls of
+   * replicate(rng) (a counting scheme of a median or quantile, in WebAssembly: count-scan.ts).
+   * False when it cannot, having drawn nothing: the caller then calls replicate.
+   */
+  replicateMany?(rng: Rng, theta: Float64Array, offset: number, count: number): boolean;
   readonly counting?: CountingScheme;
   /** Closed-form and order-statistic exact answers assume plain resampling of the sample. */
   readonly plainResampling: boolean;

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { prepare } from '../index';
 import { createRng } from '../random/rng';
 import { tallyArena } from '../random/tally-kernel';
 import { medianFromCounts, quantileFromCounts, rankValue } from './count-scan';
@@ -29,6 +30,31 @@ describe('order statistics from counts: the WebAssembly scan (count-scan.wat) an
           if (r >= 0) expect(rankValue(sorted, order, inWasm, r)).toBe(rankValue(sorted, order, inJs, r));
         }
       }
+    }
+  });
+});
+
+describe('whole chunks of a median or quantile in WebAssembly (orderChunk in count-scan.wat)', () => {
+  it('give the replicates one at a time gives, and leave the random streams alike', () => {
+    const rng = createRng('order-chunk', 'data');
+    const cases: [number, number | null][] = [[256, null], [257, null], [1000, 0.25], [1001, 0.9], [4099, null], [600, 0], [600, 1], [777, 0.5]];
+    for (const [n, p] of cases) {
+      // ties: values on a grid of n/5 points
+      const x = Array.from({ length: n }, () => Math.round(rng.double() * (n / 5)) / 7);
+      const statistic = p === null ? { name: 'median', column: 'x' } : { name: 'quantile', column: 'x', p };
+      const problem = prepare({ data: { x }, statistic, B: 1000, seed: 's' });
+      expect(problem.scheme.replicateMany, `n = ${n}`).toBeDefined();
+      const a = createRng('order-chunk', `n${n}`);
+      const b = createRng('order-chunk', `n${n}`);
+      const one = Float64Array.from({ length: 300 }, () => problem.scheme.replicate(a));
+      const many = new Float64Array(310).fill(-1);
+      expect(problem.scheme.replicateMany!(b, many, 10, 300)).toBe(true);
+      expect(Array.from(many.subarray(10)), `n = ${n}, p = ${p}`).toEqual(Array.from(one));
+      expect(many[9]).toBe(-1);
+      expect(problem.scheme.replicate(b)).toBe(problem.scheme.replicate(a));
+      // more than a chunk at once: declined, nothing drawn
+      expect(problem.scheme.replicateMany!(b, new Float64Array(2000), 0, 2000)).toBe(false);
+      expect(problem.scheme.replicate(b)).toBe(problem.scheme.replicate(a));
     }
   });
 });

@@ -1,3 +1,4 @@
+import type { Rng } from '../random/rng';
 import { kernelOf } from '../random/tally-kernel';
 import { COUNT_SCAN_WASM } from './count-scan-wasm';
 
@@ -16,6 +17,7 @@ let reached = 0;
 /** scanTo in WebAssembly (count-scan.wat), bound to one tally arena's memory. */
 interface Scanner {
   scan: (counts: number, order: number, r: number, m: number, out: number) => number;
+  orderChunk: (counts: number, m: number, thr: number, st: number, order: number, sorted: number, reps: number, out: number, scr: number, quantile: number, p: number) => void;
   /** Where the scan leaves its running count (a cell placed in the arena). */
   out: Int32Array;
   /** Each order array's copy in the arena (null: no room left, scanned in JavaScript). */
@@ -40,14 +42,55 @@ function makeScanner(counts: Int32Array): Scanner | null {
   if (!kernel || scanModule === null) return null;
   try {
     scanModule ??= new WebAssembly.Module(COUNT_SCAN_WASM);
-    const scan = new WebAssembly.Instance(scanModule, { env: { memory: kernel.memory } }).exports.scanTo as Scanner['scan'];
-    const out = kernel.place(new Int32Array(1));
+    const exports = new WebAssembly.Instance(scanModule, { env: { memory: kernel.memory }, tally: { add16: kernel.add16Export } }).exports;
+    // 16 bytes of scratch: the running count, and a value (count-scan.wat)
+    const out = kernel.place(new Int32Array(4));
     if (!out) return null;
-    return { scan, out, orders: new Map() };
+    return { scan: exports.scanTo as Scanner['scan'], orderChunk: exports.orderChunk as Scanner['orderChunk'], out, orders: new Map() };
   } catch {
     scanModule = null;
     return null;
   }
+}
+
+/**
+ * Whole replicates of the ordinary bootstrap of a median (p null) or a type-7 quantile p in
+ * WebAssembly (count-scan.wat, orderChunk): each clears `counts`, draws all n units as
+ * rng.addCounts(counts, n, n, null) does and reads the statistic as medianFromCounts /
+ * quantileFromCounts do — the same values as one replicate at a time (count-scan.test.ts).
+ * For counts in a tally arena with room for the order, the sorted values and `maxReps`
+ * replicates; else null. The runner returns false (having drawn nothing) for more replicates.
+ */
+export function orderChunkRunner(
+  counts: Int32Array,
+  q: { sorted: Float64Array; order: Int32Array; p: number | null },
+  maxReps: number,
+): ((rng: Rng, theta: Float64Array, offset: number, count: number) => boolean) | null {
+  const s = scannerFor(counts);
+  const kernel = kernelOf(counts);
+  if (!s || !kernel) return null;
+  const n = counts.length;
+  if (q.order.length !== n || q.sorted.length !== n) return null;
+  let order = s.orders.get(q.order);
+  if (order === undefined) {
+    order = kernel.place(q.order);
+    s.orders.set(q.order, order);
+  }
+  const sorted = kernel.placeDoubles(q.sorted);
+  const out = kernel.placeDoubles(new Float64Array(maxReps));
+  if (!order || !sorted || !out) return null;
+  const threshold = (65536 - n) % n;
+  const quantile = q.p === null ? 0 : 1;
+  const p = q.p ?? 0;
+  const { orderChunk } = s;
+  const orderAt = order.byteOffset;
+  const sortedAt = sorted.byteOffset;
+  return (rng, theta, offset, count) => {
+    if (count > maxReps || n > 65536) return false;
+    rng.withLanes(kernel.state, () => orderChunk(counts.byteOffset, n, threshold, kernel.state.byteOffset, orderAt, sortedAt, count, out.byteOffset, s.out.byteOffset, quantile, p));
+    theta.set(out.subarray(0, count), offset);
+    return true;
+  };
 }
 
 /** The scan in WebAssembly when counts live in a tally arena with room for `order`; else -1. */

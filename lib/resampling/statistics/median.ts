@@ -31,6 +31,7 @@ export const median = defineStatistic({
       n,
       estimate: medianFromCounts(sorted, order, onesCounts(n), n),
       fromCounts: (counts, total) => medianFromCounts(sorted, order, counts, total),
+      countsQuantile: { sorted, order, p: null },
       orderStatistic: n % 2 === 1 ? { sorted, rank: (n + 1) / 2 } : undefined,
     };
   },

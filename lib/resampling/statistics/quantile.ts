@@ -36,6 +36,7 @@ export const quantile = defineStatistic({
       n,
       estimate: quantileFromCounts(sorted, order, onesCounts(n), n, s.p),
       fromCounts: (counts, total) => quantileFromCounts(sorted, order, counts, total, s.p),
+      countsQuantile: { sorted, order, p: s.p },
       orderStatistic: Number.isInteger(h) ? { sorted, rank: h + 1 } : undefined,
     };
   },

@@ -52,6 +52,12 @@ export interface PreparedStatistic {
    * minimum, the maximum): the exact bootstrap distribution then has a closed form.
    */
   readonly orderStatistic?: { sorted: Float64Array; rank: number };
+  /**
+   * Set when fromCounts is R's median (p null) or the type-7 quantile p of the resample, read
+   * from these sorted values and units (count-scan.ts): a counting scheme can then draw and
+   * evaluate whole chunks of replicates in WebAssembly (schemes/counting.ts).
+   */
+  readonly countsQuantile?: { sorted: Float64Array; order: Int32Array; p: number | null };
   /** Ideal-bootstrap answer in closed form under ordinary resampling, if one exists. */
   closedForm?(): { se: number; bias: number; method: string } | null;
 }
