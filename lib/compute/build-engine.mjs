@@ -17,7 +17,6 @@
 //
 //   node lib/compute/build-engine.mjs            build if stale, print the bundle folder
 //   node lib/compute/build-engine.mjs --force    always rebuild
-import { spawnSync } from 'node:child_process';
 import { existsSync, readdirSync, readFileSync, rmSync, statSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
@@ -131,7 +130,10 @@ function warmUpRequest() {
  * Writes the command line's code cache (code-cache.mjs) by running the new bundle once on the
  * warm-up request. A failure leaves no cache, which only makes starts slower: say so, go on.
  */
-function writeCodeCache(dir) {
+async function writeCodeCache(dir) {
+  // node:child_process only here, when building: the freshness check runs on every start of the
+  // command line, and loading that module cost it ~2–3 ms.
+  const { spawnSync } = await import('node:child_process');
   const r = spawnSync(process.execPath, [fileURLToPath(new URL('./code-cache.mjs', import.meta.url)), '--write', path.join(dir, CLI_FILE), path.join(dir, CLI_CACHE), '-', '--threads', '0'], {
     input: warmUpRequest(),
     encoding: 'utf8',
@@ -157,7 +159,7 @@ export async function build(root = projectRoot()) {
     const cli = await esbuild.build({ ...common, entryPoints: { cli: ENTRIES.cli }, plugins: [serverOnlyEmpty, seedrandomWithoutCrypto] });
     const worker = await esbuild.build({ ...common, entryPoints: { worker: ENTRIES.worker }, plugins: [serverOnlyEmpty, seedrandomWithoutCrypto, await inertZod()] });
     const files = [...Object.keys(cli.metafile.outputs), ...Object.keys(worker.metafile.outputs)].map((f) => path.basename(f));
-    const cached = writeCodeCache(tmp);
+    const cached = await writeCodeCache(tmp);
     // An old cache left beside a new bundle would only be rejected by V8, but is removed all the same.
     if (!cached) rmSync(p.cliCache, { force: true });
     return { files: [...(cached ? [CLI_CACHE] : []), ...files], stamp: { signature, files } };
