@@ -142,78 +142,78 @@ export class TycheI implements Rng {
       let k = 0;
       let x = 0;
       for (;;) {
-      b0 = (b0 << 25) ^ (b0 >>> 7) ^ c0;
-      c0 = (c0 - d0) | 0;
-      d0 = (d0 << 24) ^ (d0 >>> 8) ^ a0;
-      a0 = (a0 - b0) | 0;
-      b0 = (b0 << 20) ^ (b0 >>> 12) ^ c0;
-      c0 = (c0 - d0) | 0;
-      d0 = (d0 << 16) ^ (c0 >>> 16) ^ a0;
-      a0 = (a0 - b0) | 0;
-      b1 = (b1 << 25) ^ (b1 >>> 7) ^ c1;
-      c1 = (c1 - d1) | 0;
-      d1 = (d1 << 24) ^ (d1 >>> 8) ^ a1;
-      a1 = (a1 - b1) | 0;
-      b1 = (b1 << 20) ^ (b1 >>> 12) ^ c1;
-      c1 = (c1 - d1) | 0;
-      d1 = (d1 << 16) ^ (c1 >>> 16) ^ a1;
-      a1 = (a1 - b1) | 0;
-      b2 = (b2 << 25) ^ (b2 >>> 7) ^ c2;
-      c2 = (c2 - d2) | 0;
-      d2 = (d2 << 24) ^ (d2 >>> 8) ^ a2;
-      a2 = (a2 - b2) | 0;
-      b2 = (b2 << 20) ^ (b2 >>> 12) ^ c2;
-      c2 = (c2 - d2) | 0;
-      d2 = (d2 << 16) ^ (c2 >>> 16) ^ a2;
-      a2 = (a2 - b2) | 0;
-      b3 = (b3 << 25) ^ (b3 >>> 7) ^ c3;
-      c3 = (c3 - d3) | 0;
-      d3 = (d3 << 24) ^ (d3 >>> 8) ^ a3;
-      a3 = (a3 - b3) | 0;
-      b3 = (b3 << 20) ^ (b3 >>> 12) ^ c3;
-      c3 = (c3 - d3) | 0;
-      d3 = (d3 << 16) ^ (c3 >>> 16) ^ a3;
-      a3 = (a3 - b3) | 0;
-      x = (a0 >>> 16) * m;
-      if ((x & 0xffff) >= threshold) {
-        out[offset + k++] = x >>> 16;
-        if (k === times) break;
-      }
-      x = (a0 & 0xffff) * m;
-      if ((x & 0xffff) >= threshold) {
-        out[offset + k++] = x >>> 16;
-        if (k === times) break;
-      }
-      x = (a1 >>> 16) * m;
-      if ((x & 0xffff) >= threshold) {
-        out[offset + k++] = x >>> 16;
-        if (k === times) break;
-      }
-      x = (a1 & 0xffff) * m;
-      if ((x & 0xffff) >= threshold) {
-        out[offset + k++] = x >>> 16;
-        if (k === times) break;
-      }
-      x = (a2 >>> 16) * m;
-      if ((x & 0xffff) >= threshold) {
-        out[offset + k++] = x >>> 16;
-        if (k === times) break;
-      }
-      x = (a2 & 0xffff) * m;
-      if ((x & 0xffff) >= threshold) {
-        out[offset + k++] = x >>> 16;
-        if (k === times) break;
-      }
-      x = (a3 >>> 16) * m;
-      if ((x & 0xffff) >= threshold) {
-        out[offset + k++] = x >>> 16;
-        if (k === times) break;
-      }
-      x = (a3 & 0xffff) * m;
-      if ((x & 0xffff) >= threshold) {
-        out[offset + k++] = x >>> 16;
-        if (k === times) break;
-      }
+        b0 = (b0 << 25) ^ (b0 >>> 7) ^ c0;
+        c0 = (c0 - d0) | 0;
+        d0 = (d0 << 24) ^ (d0 >>> 8) ^ a0;
+        a0 = (a0 - b0) | 0;
+        b0 = (b0 << 20) ^ (b0 >>> 12) ^ c0;
+        c0 = (c0 - d0) | 0;
+        d0 = (d0 << 16) ^ (c0 >>> 16) ^ a0;
+        a0 = (a0 - b0) | 0;
+        b1 = (b1 << 25) ^ (b1 >>> 7) ^ c1;
+        c1 = (c1 - d1) | 0;
+        d1 = (d1 << 24) ^ (d1 >>> 8) ^ a1;
+        a1 = (a1 - b1) | 0;
+        b1 = (b1 << 20) ^ (b1 >>> 12) ^ c1;
+        c1 = (c1 - d1) | 0;
+        d1 = (d1 << 16) ^ (c1 >>> 16) ^ a1;
+        a1 = (a1 - b1) | 0;
+        b2 = (b2 << 25) ^ (b2 >>> 7) ^ c2;
+        c2 = (c2 - d2) | 0;
+        d2 = (d2 << 24) ^ (d2 >>> 8) ^ a2;
+        a2 = (a2 - b2) | 0;
+        b2 = (b2 << 20) ^ (b2 >>> 12) ^ c2;
+        c2 = (c2 - d2) | 0;
+        d2 = (d2 << 16) ^ (c2 >>> 16) ^ a2;
+        a2 = (a2 - b2) | 0;
+        b3 = (b3 << 25) ^ (b3 >>> 7) ^ c3;
+        c3 = (c3 - d3) | 0;
+        d3 = (d3 << 24) ^ (d3 >>> 8) ^ a3;
+        a3 = (a3 - b3) | 0;
+        b3 = (b3 << 20) ^ (b3 >>> 12) ^ c3;
+        c3 = (c3 - d3) | 0;
+        d3 = (d3 << 16) ^ (c3 >>> 16) ^ a3;
+        a3 = (a3 - b3) | 0;
+        x = (a0 >>> 16) * m;
+        if ((x & 0xffff) >= threshold) {
+          out[offset + k++] = x >>> 16;
+          if (k === times) break;
+        }
+        x = (a0 & 0xffff) * m;
+        if ((x & 0xffff) >= threshold) {
+          out[offset + k++] = x >>> 16;
+          if (k === times) break;
+        }
+        x = (a1 >>> 16) * m;
+        if ((x & 0xffff) >= threshold) {
+          out[offset + k++] = x >>> 16;
+          if (k === times) break;
+        }
+        x = (a1 & 0xffff) * m;
+        if ((x & 0xffff) >= threshold) {
+          out[offset + k++] = x >>> 16;
+          if (k === times) break;
+        }
+        x = (a2 >>> 16) * m;
+        if ((x & 0xffff) >= threshold) {
+          out[offset + k++] = x >>> 16;
+          if (k === times) break;
+        }
+        x = (a2 & 0xffff) * m;
+        if ((x & 0xffff) >= threshold) {
+          out[offset + k++] = x >>> 16;
+          if (k === times) break;
+        }
+        x = (a3 >>> 16) * m;
+        if ((x & 0xffff) >= threshold) {
+          out[offset + k++] = x >>> 16;
+          if (k === times) break;
+        }
+        x = (a3 & 0xffff) * m;
+        if ((x & 0xffff) >= threshold) {
+          out[offset + k++] = x >>> 16;
+          if (k === times) break;
+        }
       }
       st[0] = a0;
       st[1] = a1;
@@ -315,7 +315,7 @@ export class TycheI implements Rng {
   }
 
   /**
-   * The last `need` (< 8 or so) indices of an addCounts call, one at a time in fillIndices'
+   * The last `need` (fewer than eight) indices of an addCounts call, one at a time in fillIndices'
    * order; the rest of the last step's indices are dropped.
    */
   private lastFew16(counts: Int32Array, m: number, threshold: number, need: number, units: Int32Array | null): void {
