@@ -8,6 +8,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { EngineError } from '@/lib/resampling/errors';
+import { takeEarlyRequest } from './early-worker.mjs';
 import { defaultWorkers, looksLarge, prewarmCompute } from './shared-pool';
 import { trace } from './trace';
 
@@ -39,17 +40,24 @@ export async function main(argv: string[]): Promise<void> {
   if (file === null) usage('give a request file, or - to read the request from standard input');
 
   trace('cli:start');
-  let text: string;
-  try {
-    text = readFileSync(file === '-' ? 0 : file, 'utf8');
-  } catch (e) {
-    return finish(JSON.stringify({ error: { code: 'bad_request:file', message: `cannot read ${file}: ${(e as Error).message}`, path: '' } }), 2);
-  }
   let input: unknown;
-  try {
-    input = JSON.parse(text);
-  } catch (e) {
-    return finish(JSON.stringify({ error: { code: 'bad_request:json', message: `the request is not valid JSON: ${(e as Error).message}`, path: '' } }), 1);
+  // The launcher may have parsed the file already (early-worker.mjs).
+  const early = file === '-' ? null : takeEarlyRequest(file);
+  if (early) {
+    input = early.input;
+    trace('cli:request-from-launcher');
+  } else {
+    let text: string;
+    try {
+      text = readFileSync(file === '-' ? 0 : file, 'utf8');
+    } catch (e) {
+      return finish(JSON.stringify({ error: { code: 'bad_request:file', message: `cannot read ${file}: ${(e as Error).message}`, path: '' } }), 2);
+    }
+    try {
+      input = JSON.parse(text);
+    } catch (e) {
+      return finish(JSON.stringify({ error: { code: 'bad_request:json', message: `the request is not valid JSON: ${(e as Error).message}`, path: '' } }), 1);
+    }
   }
   // A large request goes to worker threads: start them now, so that they start up while
   // this thread loads the engine (a separate chunk of the bundle, imported only now) and

@@ -132,7 +132,7 @@ describe('command line', () => {
     expect(JSON.parse(bad.stdout).error).toMatchObject({ code: 'invalid:request', path: 'statistic.column' });
   }, 120_000);
 
-  it('a large request from a file gets the worker the launcher started before loading the engine (one worker, same response)', async () => {
+  it('a large request from a file gets the worker the launcher started before loading the engine, and the request it parsed (one worker, one parse, same response)', async () => {
     const file = path.join(tmpdir(), `margin-cli-early-${process.pid}.json`);
     writeFileSync(file, JSON.stringify(big));
     const traced = await new Promise<{ stdout: string; stderr: string }>((resolve, reject) => {
@@ -145,6 +145,8 @@ describe('command line', () => {
     expect(marks.filter((l) => l.startsWith('launcher:early-worker '))).toHaveLength(1);
     // adopted by the pool: no second worker was started
     expect(marks.filter((l) => l.startsWith('worker:loaded '))).toHaveLength(1);
+    // the command line did not read and parse the file again
+    expect(marks.filter((l) => l.startsWith('cli:request-from-launcher '))).toHaveLength(1);
     // a small request starts none
     const small = path.join(tmpdir(), `margin-cli-small-${process.pid}.json`);
     writeFileSync(small, JSON.stringify({ ...big, B: 100 }));
@@ -152,6 +154,7 @@ describe('command line', () => {
       execFile(process.execPath, [path.join(root, 'scripts/compute.mjs'), small], { cwd: root, env: { ...process.env, MARGIN_TRACE: '1' } }, (err, _stdout, stderr) => (err ? reject(err) : resolve(stderr)));
     });
     expect(quiet).not.toContain('launcher:early-worker');
+    expect(quiet).toContain('cli:request-from-launcher');
   }, 120_000);
 
   it('exits non-zero with a JSON error on bad input', async () => {

@@ -2,6 +2,7 @@ import type { Worker } from 'node:worker_threads';
 
 export const INLINE_DRAWS: number;
 export function looksLarge(input: unknown): boolean;
-export function startEarlyWorker(argv: string[], workerFile: string): void;
+export function startEarly(argv: string[], workerFile: string): void;
+export function takeEarlyRequest(file: string): { input: unknown } | null;
 export function dropEarlyWorker(): void;
 export function takeEarlyWorker(file: string): { file: string; worker: Worker; isReady: () => boolean } | null;

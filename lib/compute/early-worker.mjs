@@ -1,10 +1,13 @@
-// Starting the engine's worker thread as early as possible on the command line. A worker
+// Starting the engine's worker thread as early as possible on the command line, and reading the
+// request only once. A worker
 // thread takes ~50–80 ms to start here (Node's own start-up in the new thread, then the worker
 // bundle), and on the benchmark request the main thread is drawing replicates ~55 ms after the
 // engine bundle starts; a worker started by the bundle joined late and drew only a few chunks.
 // So the launcher (scripts/compute.mjs) starts it first thing, before it checks that the
 // bundles are fresh and loads the engine, when the request file looks large; the pool
-// (pool.ts) adopts it as its first worker. Plain JavaScript because the launcher runs it
+// (pool.ts) adopts it as its first worker. The request it parsed to decide is handed to the
+// command line (cli.ts), which would otherwise read and parse it again (for a large file,
+// parsing is most of a second). Plain JavaScript because the launcher runs it
 // before anything is built; shared-pool.ts takes INLINE_DRAWS and looksLarge from here too.
 import { readFileSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
@@ -27,30 +30,33 @@ export function looksLarge(input) {
   return n * B >= INLINE_DRAWS;
 }
 
-// The launcher and the engine bundle share no module instance: the worker waits here.
+// The launcher and the engine bundle share no module instance: the worker and the request wait here.
 const KEY = Symbol.for('margin.engine.earlyWorker');
+const REQUEST_KEY = Symbol.for('margin.engine.earlyRequest');
 
 /**
- * The launcher: when the command line's request file (not standard input) parses and looks
- * large, and it is not run with `--threads 0`, starts a worker on `workerFile`. Anything
- * unusual — an unreadable file, broken JSON, one core — starts nothing: the command line then
- * reads the request itself and reports what is wrong, as before.
+ * The launcher: reads and parses the command line's request file (not standard input) and
+ * keeps it for the command line (takeEarlyRequest); when it looks large and the command line
+ * is not run with `--threads 0`, starts a worker on `workerFile`. Anything unusual — an
+ * unreadable file, broken JSON — keeps and starts nothing: the command line then reads the
+ * request itself and reports what is wrong, as before.
  */
-export function startEarlyWorker(argv, workerFile) {
+export function startEarly(argv, workerFile) {
   let file = null;
+  let noWorkers = false;
   for (let i = 0; i < argv.length; i++) {
-    if (argv[i] === '--threads') {
-      if (argv[++i] === '0') return;
-    } else if (!argv[i].startsWith('--') && file === null) file = argv[i];
+    if (argv[i] === '--threads') noWorkers = argv[++i] === '0';
+    else if (!argv[i].startsWith('--') && file === null) file = argv[i];
   }
-  if (file === null || file === '-' || availableParallelism() < 2) return;
+  if (file === null || file === '-') return;
   let input;
   try {
     input = JSON.parse(readFileSync(file, 'utf8'));
   } catch {
     return;
   }
-  if (!looksLarge(input)) return;
+  globalThis[REQUEST_KEY] = { file, input };
+  if (noWorkers || !looksLarge(input) || availableParallelism() < 2) return;
   const worker = new Worker(workerFile);
   worker.unref();
   let ready = false;
@@ -69,6 +75,13 @@ export function dropEarlyWorker() {
   const early = globalThis[KEY];
   globalThis[KEY] = undefined;
   if (early) void early.worker.terminate();
+}
+
+/** The command line: the request the launcher parsed from `file`, as { input } (once), else null. */
+export function takeEarlyRequest(file) {
+  const early = globalThis[REQUEST_KEY];
+  globalThis[REQUEST_KEY] = undefined;
+  return early && early.file === file ? { input: early.input } : null;
 }
 
 /** The pool: the early worker when it runs this worker bundle (once), else null. */
