@@ -1,3 +1,4 @@
+import { lazyWasmModule } from '../wasm-module';
 import { SERIES_SUMS_WASM } from './series-sums-wasm';
 
 /**
@@ -37,12 +38,15 @@ export interface LoadedSeries {
 
 const OUT = 0;
 const X = 64;
+const sumsModule = lazyWasmModule(SERIES_SUMS_WASM);
+/** The module's one instance on this thread (its memory grows to the longest series). */
 let sums: SumsExports | null | undefined;
 
 function module(): SumsExports | null {
   if (sums === undefined) {
+    const mod = sumsModule();
     try {
-      sums = typeof WebAssembly === 'object' ? (new WebAssembly.Instance(new WebAssembly.Module(SERIES_SUMS_WASM)).exports as unknown as SumsExports) : null;
+      sums = mod ? (new WebAssembly.Instance(mod).exports as unknown as SumsExports) : null;
     } catch {
       sums = null;
     }

@@ -57,7 +57,7 @@ export const SMALL_M = 65536;
 /** Generators side by side for the 16-bit index draws (one SIMD vector of 32-bit lanes). */
 const LANES = 4;
 const LANE_WORDS = 4 * LANES;
-/** Steps of the four lanes per call of a 16-bit batch loop in JavaScript (addDirect16). */
+/** Steps of the four lanes per call of a 16-bit batch loop in JavaScript (addJs16). */
 const BATCH_16 = 64;
 
 export class TycheI implements Rng {
@@ -67,8 +67,8 @@ export class TycheI implements Rng {
   private d: number;
   /** The four lane generators' state (laneState), null until the first 16-bit index draw. */
   private lanes: Int32Array | null = null;
-  /** Scratch: the lanes' outputs of one step. */
-  private readonly laneOut = new Int32Array(LANES);
+  /** Scratch: the last few indices of an addCounts call (lastFew16). */
+  private readonly few = new Int32Array(8);
 
   /** `laneSeed`: the seed string of this stream, from which its lane generators are seeded. */
   constructor(
@@ -110,8 +110,7 @@ export class TycheI implements Rng {
     if (m <= SMALL_M) {
       const kernel = kernelOf(counts);
       if (kernel && (units === null || units.buffer === counts.buffer)) this.addWasm16(kernel, counts, m, times, units);
-      else if (units === null) this.addDirect16(counts, m, times);
-      else this.addVia16(counts, m, times, units);
+      else this.addJs16(counts, m, times, units);
     } else if (units === null) this.addDirect32(counts, m, times);
     else this.addVia32(counts, m, times, units);
   }
@@ -258,9 +257,9 @@ export class TycheI implements Rng {
   // monomorphic in V8.
 
   /**
-   * addDirect16 / addVia16 and their last few indices, run as one WebAssembly call (add16 in
+   * addJs16 and its last few indices, run as one WebAssembly call (add16 in
    * tally16.wat, tally-kernel.ts) on counts (and units) in a kernel's memory: the lane state
-   * goes through the kernel's memory, and the batches and the tail are as in addDirect16, so
+   * goes through the kernel's memory, and the batches and the tail are as in addJs16, so
    * the draws are the same.
    */
   private addWasm16(kernel: TallyKernel, counts: Int32Array, m: number, times: number, units: Int32Array | null): void {
@@ -278,7 +277,7 @@ export class TycheI implements Rng {
    * m ≤ 2¹⁶: each step of the four lane generators gives eight indices, Lemire's method on each
    * 16-bit half of each lane's output (lane 0 high half, lane 0 low half, lane 1 high half, …).
    */
-  private addDirect16(counts: Int32Array, m: number, times: number): void {
+  private addJs16(counts: Int32Array, m: number, times: number, units: Int32Array | null): void {
     const threshold = (TWO16 - m) % m;
     let k = 0;
     // Steps go in batches of q ≤ ⌊(times − k)/8⌋, which can accept at most times − k draws,
@@ -291,46 +290,26 @@ export class TycheI implements Rng {
     // than one long one: V8 then optimizes the batch function as a whole after its first
     // calls, instead of running the loop in on-stack-replacement code compiled in the middle of
     // the first call, which then deoptimized and re-optimized again and again (bench/README.md).
-    // Count arrays in WebAssembly memory skip these loops altogether (addWasm16).
+    // Count arrays in WebAssembly memory skip these loops altogether (addWasm16). With units,
+    // each index x lands at counts[units[x]] (via16Batch); the two batch loops are kept
+    // apart so each stays monomorphic in V8.
     const lanes = this.laneState();
     for (;;) {
       const q = Math.min((times - k) >> 3, BATCH_16);
       if (q === 0) break;
-      k += direct16Batch(lanes, counts, m, threshold, q);
+      k += units === null ? direct16Batch(lanes, counts, m, threshold, q) : via16Batch(lanes, counts, m, threshold, q, units);
     }
-    if (k < times) this.lastFew16(counts, m, threshold, times - k, null);
-  }
-
-  /** As addDirect16, each index mapped through units. */
-  private addVia16(counts: Int32Array, m: number, times: number, units: Int32Array): void {
-    const threshold = (TWO16 - m) % m;
-    let k = 0;
-    const lanes = this.laneState();
-    for (;;) {
-      const q = Math.min((times - k) >> 3, BATCH_16);
-      if (q === 0) break;
-      k += via16Batch(lanes, counts, m, threshold, q, units);
-    }
-    if (k < times) this.lastFew16(counts, m, threshold, times - k, units);
+    if (k < times) this.lastFew16(counts, m, times - k, units);
   }
 
   /**
-   * The last `need` (fewer than eight) indices of an addCounts call, one at a time in fillIndices'
-   * order; the rest of the last step's indices are dropped.
+   * The last `need` (fewer than eight) indices of an addCounts call: drawn as fillIndices draws
+   * them, one at a time (the rest of the last step's indices dropped), then tallied.
    */
-  private lastFew16(counts: Int32Array, m: number, threshold: number, need: number, units: Int32Array | null): void {
-    const lanes = this.laneState();
-    const w = this.laneOut;
-    while (need > 0) {
-      stepLanes(lanes, w);
-      for (let j = 0; j < 8 && need > 0; j++) {
-        const x = (j & 1 ? w[j >> 1] & 0xffff : w[j >> 1] >>> 16) * m;
-        if ((x & 0xffff) >= threshold) {
-          counts[units === null ? x >>> 16 : units[x >>> 16]]++;
-          need--;
-        }
-      }
-    }
+  private lastFew16(counts: Int32Array, m: number, need: number, units: Int32Array | null): void {
+    const few = this.few;
+    this.fillIndices(few, 0, m, need);
+    for (let i = 0; i < need; i++) counts[units === null ? few[i] : units[few[i]]]++;
   }
 
   /** m > 2¹⁶: one index per 32-bit output (uniform-index.ts). */
@@ -407,29 +386,6 @@ export function createRng(seed: string, stream: string): Rng {
   const streamSeed = `${seed}\u001f${stream}`;
   const prng = seedrandom.tychei(streamSeed, { state: true });
   return new TycheI(prng.state() as unknown as { a: number; b: number; c: number; d: number }, streamSeed);
-}
-
-/** One Tyche-i step of each lane (state layout as in TycheI.laneState); outputs (the new a) to w. */
-function stepLanes(st: Int32Array, w: Int32Array): void {
-  for (let j = 0; j < LANES; j++) {
-    let a = st[j];
-    let b = st[LANES + j];
-    let c = st[2 * LANES + j];
-    let d = st[3 * LANES + j];
-    b = (b << 25) ^ (b >>> 7) ^ c;
-    c = (c - d) | 0;
-    d = (d << 24) ^ (d >>> 8) ^ a;
-    a = (a - b) | 0;
-    b = (b << 20) ^ (b >>> 12) ^ c;
-    c = (c - d) | 0;
-    d = (d << 16) ^ (c >>> 16) ^ a;
-    a = (a - b) | 0;
-    st[j] = a;
-    st[LANES + j] = b;
-    st[2 * LANES + j] = c;
-    st[3 * LANES + j] = d;
-    w[j] = a;
-  }
 }
 
 /**

@@ -1,3 +1,4 @@
+import { lazyWasmModule } from '../wasm-module';
 import { TALLY16_WASM } from './tally16-wasm';
 
 /**
@@ -35,18 +36,7 @@ export interface TallyArena {
 }
 
 const kernels = new WeakMap<ArrayBufferLike, TallyKernel>();
-let compiled: WebAssembly.Module | null | undefined;
-
-function tallyModule(): WebAssembly.Module | null {
-  if (compiled === undefined) {
-    try {
-      compiled = typeof WebAssembly === 'object' ? new WebAssembly.Module(TALLY16_WASM) : null;
-    } catch {
-      compiled = null;
-    }
-  }
-  return compiled;
-}
+const tallyModule = lazyWasmModule(TALLY16_WASM);
 
 /** The lanes' state (four vectors of four i32), then 16 bytes of scratch for the loops' tail. */
 const LANE_STATE_BYTES = 64;

@@ -9,7 +9,7 @@
 ;; WebAssembly because it is compiled before the first call instead of being optimized part-way
 ;; through it, and because JavaScript has no SIMD.
 ;;
-;; add16 is a whole addCounts call (TycheI.addDirect16 / addVia16 and lastFew16 in rng.ts): the
+;; add16 is a whole addCounts call (TycheI.addJs16 and lastFew16 in rng.ts): the
 ;; batches of whole steps, then the last few indices one at a time, so a replicate's draws are
 ;; one call from JavaScript instead of a handful plus a JavaScript tail.
 ;;

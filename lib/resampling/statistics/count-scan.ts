@@ -1,5 +1,6 @@
 import type { Rng } from '../random/rng';
-import { kernelOf } from '../random/tally-kernel';
+import { kernelOf, type TallyKernel } from '../random/tally-kernel';
+import { lazyWasmModule } from '../wasm-module';
 import { COUNT_SCAN_WASM } from './count-scan-wasm';
 
 /**
@@ -24,7 +25,7 @@ interface Scanner {
   orders: Map<Int32Array, Int32Array | null>;
 }
 
-let scanModule: WebAssembly.Module | null | undefined;
+const scanModule = lazyWasmModule(COUNT_SCAN_WASM);
 /** Per count array's buffer: its scanner, or null for counts outside any arena. */
 const scanners = new WeakMap<ArrayBufferLike, Scanner | null>();
 
@@ -39,18 +40,27 @@ function scannerFor(counts: Int32Array): Scanner | null {
 
 function makeScanner(counts: Int32Array): Scanner | null {
   const kernel = kernelOf(counts);
-  if (!kernel || scanModule === null) return null;
+  const mod = scanModule();
+  if (!kernel || !mod) return null;
   try {
-    scanModule ??= new WebAssembly.Module(COUNT_SCAN_WASM);
-    const exports = new WebAssembly.Instance(scanModule, { env: { memory: kernel.memory }, tally: { add16: kernel.add16Export } }).exports;
+    const exports = new WebAssembly.Instance(mod, { env: { memory: kernel.memory }, tally: { add16: kernel.add16Export } }).exports;
     // 16 bytes of scratch: the running count, and a value (count-scan.wat)
     const out = kernel.place(new Int32Array(4));
     if (!out) return null;
     return { scan: exports.scanTo as Scanner['scan'], orderChunk: exports.orderChunk as Scanner['orderChunk'], out, orders: new Map() };
   } catch {
-    scanModule = null;
     return null;
   }
+}
+
+/** `order`'s copy in the arena of `counts` (placed on first use; null when there is no room). */
+function placedOrder(s: Scanner, kernel: TallyKernel, order: Int32Array): Int32Array | null {
+  let placed = s.orders.get(order);
+  if (placed === undefined) {
+    placed = kernel.place(order);
+    s.orders.set(order, placed);
+  }
+  return placed;
 }
 
 /**
@@ -70,12 +80,9 @@ export function orderChunkRunner(
   const kernel = kernelOf(counts);
   if (!s || !kernel) return null;
   const n = counts.length;
-  if (q.order.length !== n || q.sorted.length !== n) return null;
-  let order = s.orders.get(q.order);
-  if (order === undefined) {
-    order = kernel.place(q.order);
-    s.orders.set(q.order, order);
-  }
+  // orderChunk draws with the 16-bit lanes (add16): up to 2¹⁶ units
+  if (q.order.length !== n || q.sorted.length !== n || n > 65536) return null;
+  const order = placedOrder(s, kernel, q.order);
   const sorted = kernel.placeDoubles(q.sorted);
   const out = kernel.placeDoubles(new Float64Array(maxReps));
   if (!order || !sorted || !out) return null;
@@ -86,7 +93,7 @@ export function orderChunkRunner(
   const orderAt = order.byteOffset;
   const sortedAt = sorted.byteOffset;
   return (rng, theta, offset, count) => {
-    if (count > maxReps || n > 65536) return false;
+    if (count > maxReps) return false;
     rng.withLanes(kernel.state, () => orderChunk(counts.byteOffset, n, threshold, kernel.state.byteOffset, orderAt, sortedAt, count, out.byteOffset, s.out.byteOffset, quantile, p));
     theta.set(out.subarray(0, count), offset);
     return true;
@@ -97,11 +104,7 @@ export function orderChunkRunner(
 function scanInWasm(order: Int32Array, counts: Int32Array, r: number, m: number): number {
   const s = scannerFor(counts);
   if (!s) return -1;
-  let placed = s.orders.get(order);
-  if (placed === undefined) {
-    placed = kernelOf(counts)!.place(order);
-    s.orders.set(order, placed);
-  }
+  const placed = placedOrder(s, kernelOf(counts)!, order);
   if (!placed) return -1;
   const p = s.scan(counts.byteOffset, placed.byteOffset, r, m, s.out.byteOffset);
   reached = s.out[0];

@@ -1,4 +1,5 @@
 import { lowerBound } from './lower-bound';
+import { lazyWasmModule } from '../wasm-module';
 import { SORT_POSITIONS_WASM } from './sort-positions-wasm';
 
 /**
@@ -47,7 +48,7 @@ export function sortUnits(values: ArrayLike<number>, units?: ArrayLike<number>):
 
 /** From this many keys up the placing loops run in WebAssembly; fewer cost little either way. */
 const WASM_MIN_KEYS = 256;
-let positionsModule: WebAssembly.Module | null | undefined;
+const positionsModule = lazyWasmModule(SORT_POSITIONS_WASM);
 
 /**
  * The placing loops of sortUnits in WebAssembly (sort-positions.wat): the same order and
@@ -56,19 +57,13 @@ let positionsModule: WebAssembly.Module | null | undefined;
  * JavaScript loops then run. `order` holds key indices (the caller maps them to units).
  */
 function placeInWasm(ascending: Float64Array, keys: Float64Array): { sorted: Float64Array; order: Int32Array } | null {
-  if (positionsModule === undefined) {
-    try {
-      positionsModule = typeof WebAssembly === 'object' ? new WebAssembly.Module(SORT_POSITIONS_WASM) : null;
-    } catch {
-      positionsModule = null;
-    }
-  }
-  if (!positionsModule) return null;
+  const mod = positionsModule();
+  if (!mod) return null;
   const m = keys.length;
   let memory: WebAssembly.Memory;
   let positions: (asc: number, keys: number, m: number, taken: number, order: number, sorted: number) => void;
   try {
-    const instance = new WebAssembly.Instance(positionsModule);
+    const instance = new WebAssembly.Instance(mod);
     memory = instance.exports.memory as WebAssembly.Memory;
     positions = instance.exports.positions as typeof positions;
     const need = 32 * m - memory.buffer.byteLength;
