@@ -2,6 +2,7 @@ import type { ConvergencePoint } from '../contract/response';
 import type { IntervalMethod } from '../contract/schema';
 import { INTERVALS } from '../intervals/registry';
 import { biasCorrection } from '../intervals/bca';
+import { finiteSorted } from '../math/finite-sorted';
 import { moments } from '../math/moments';
 import { seMonteCarloError } from '../montecarlo/se-error';
 
@@ -32,13 +33,13 @@ export function convergenceSeries(
 ): ConvergencePoint[] {
   const out: ConvergencePoint[] = [];
   for (const b of convergenceGrid(theta.length)) {
-    const prefix = theta.subarray(0, b).filter((v) => Number.isFinite(v)).sort();
+    const prefix = finiteSorted(theta.subarray(0, b));
     if (prefix.length < 2) {
       out.push({ B: b, se: null, bias: null, intervals: {} });
       continue;
     }
     const m = moments(prefix);
-    const tPrefix = innerT ? innerT.subarray(0, b).filter((v) => Number.isFinite(v)).sort() : null;
+    const tPrefix = innerT ? finiteSorted(innerT.subarray(0, b)) : null;
     const input = {
       level,
       estimate,

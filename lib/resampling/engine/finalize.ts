@@ -8,6 +8,7 @@ import { INTERVALS } from '../intervals/registry';
 import type { IntervalInput } from '../intervals/types';
 import { type JackknifeOutcome, jackknife } from '../jackknife/jackknife';
 import { bootstrapSeOfResample } from '../jackknife/resample-se';
+import { finiteSorted } from '../math/finite-sorted';
 import { type Moments, moments } from '../math/moments';
 import { quantileSorted } from '../math/quantile-sorted';
 import { adviseB } from '../montecarlo/advice';
@@ -42,7 +43,7 @@ export function finalize(problem: Problem, theta: Float64Array, innerSe: Float64
   const methods = req.intervals.methods as IntervalMethod[];
   const level = req.intervals.level;
 
-  const sorted = theta.filter((v) => Number.isFinite(v)).sort();
+  const sorted = finiteSorted(theta);
   const nonFinite = B - sorted.length;
   const m: Moments | null = sorted.length >= 2 ? moments(sorted) : null;
   const se = m ? m.sd : Number.NaN;
@@ -72,7 +73,7 @@ export function finalize(problem: Problem, theta: Float64Array, innerSe: Float64
     }
     innerT = new Float64Array(B);
     for (let b = 0; b < B; b++) innerT[b] = (theta[b] - estimate) / innerSe[b];
-    const t = innerT.filter((v) => Number.isFinite(v)).sort();
+    const t = finiteSorted(innerT);
     studentizedDropped = sorted.length - t.length;
     if (se0 !== null) studentized = { sortedT: t, se0 };
   }

@@ -1,6 +1,7 @@
 import * as ss from 'simple-statistics';
 import { jStat as js } from '@/tests/reference/support/jstat';
 import { describe, expect, it } from 'vitest';
+import { finiteSorted } from './finite-sorted';
 import { incompleteBeta } from './incomplete-beta';
 import { logGamma } from './log-gamma';
 import { moments } from './moments';
@@ -81,5 +82,22 @@ describe('moments and type-7 quantile', () => {
     const x = [0.5, 1.5, 2, 7, 7, 11, 13.25, 20];
     for (const p of [0, 0.1, 0.25, 0.5, 0.6, 0.75, 0.8, 1]) expect(quantileSorted(x, p)).toBeCloseTo(js.percentile(x, p), 12);
     expect(quantileSorted(x, 0.99)).toBeCloseTo(13.25 + 0.93 * 6.75, 12);
+  });
+});
+
+describe('finiteSorted', () => {
+  it('keeps the finite values, ascending, in a new array — as filter(Number.isFinite) then sort', () => {
+    const x = new Float64Array([3, Number.NaN, -1, Number.POSITIVE_INFINITY, 2, -0, 0, Number.NEGATIVE_INFINITY, 2]);
+    const out = finiteSorted(x);
+    expect(Array.from(out)).toEqual(Array.from(x.filter((v) => Number.isFinite(v)).sort()));
+    expect(Array.from(out)).toEqual([-1, -0, 0, 2, 2, 3]);
+    expect(Object.is(out[1], -0)).toBe(true);
+    // all finite: a sorted copy; the input is left as it was
+    const y = new Float64Array([5, 1, 4]);
+    const sortedY = finiteSorted(y);
+    expect(Array.from(sortedY)).toEqual([1, 4, 5]);
+    expect(Array.from(y)).toEqual([5, 1, 4]);
+    expect(finiteSorted(y.subarray(1))).toEqual(new Float64Array([1, 4]));
+    expect(finiteSorted(new Float64Array([Number.NaN])).length).toBe(0);
   });
 });

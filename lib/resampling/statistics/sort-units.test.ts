@@ -16,9 +16,18 @@ describe('sortUnits', () => {
       { values: Array.from({ length: 5000 }, () => rng.double() * 100 - 50) },
       { values: [9, 8, 7, 6, 5, 4, 3, 2, 1, 0], units: [9, 1, 4, 4, 0, 7] },
       { values: Array.from({ length: 300 }, () => rng.int32() % 5), units: Array.from({ length: 120 }, () => Math.abs(rng.int32()) % 300) },
-      // from 256 keys up the placing runs in WebAssembly (sort-positions.wat): ±0 ties and repeated units there too
+      // from 256 keys up the sort runs in WebAssembly (sort-positions.wat): ±0 ties and repeated units there too
       { values: Array.from({ length: 700 }, (_, i) => (i % 3 === 0 ? -0 : i % 3 === 1 ? 0 : rng.int32() % 4)), units: Array.from({ length: 500 }, () => Math.abs(rng.int32()) % 700) },
       { values: Array.from({ length: 256 }, (_, i) => (i * 37) % 11) },
+      // the radix sort's integer images: signs, infinities, subnormals, magnitudes far apart, and
+      // keys of one magnitude (passes skipped when a byte is the same in every key)
+      {
+        values: Array.from({ length: 1500 }, (_, i) =>
+          [-Infinity, Infinity, -0, 5e-324, -5e-324, 1e308, -1e308, 1, -1][i % 9] + (i % 9 === 7 ? rng.int32() % 3 : 0),
+        ),
+      },
+      { values: Array.from({ length: 3000 }, () => 1024 + (Math.abs(rng.int32()) % 1024) / 8) },
+      { values: Array.from({ length: 400 }, () => 7) },
     ];
     for (const c of cases) {
       const fast = sortUnits(c.values, c.units);
