@@ -2,10 +2,11 @@
 // command line: dist/engine/worker.cjs (the worker entry) and dist/engine/cli.cjs (the command
 // line, whose engine modules are evaluated only once it has started its workers), plus
 // dist/engine/cli.cjs.cache, V8's code cache of the command line after a small warm-up request
-// (code-cache.mjs; scripts/compute.mjs runs the bundle with it). Worker threads need plain JS
+// (code-cache.cjs; scripts/compute.cjs runs the bundle with it). Worker threads need plain JS
 // found at run time (under vitest, the CLI and `next start` alike), so the bundle is resolved
 // from the project root and rebuilt when any source file under lib/resampling, lib/compute or
-// lib/build changed (a signature of paths, sizes and mtimes is kept in dist/engine/stamp.json).
+// lib/build changed (a signature of paths, sizes and mtimes is kept in dist/engine/stamp.json;
+// engine-bundle.cjs, which the launcher checks on every start).
 // Builds go to a temporary folder and are renamed into place (lib/build/bundle-on-demand.mjs).
 //
 // Start-up cost is what the shapes are for: CommonJS starts faster than an ES module (no
@@ -17,80 +18,13 @@
 //
 //   node lib/compute/build-engine.mjs            build if stale, print the bundle folder
 //   node lib/compute/build-engine.mjs --force    always rebuild
-import { existsSync, readdirSync, readFileSync, rmSync, statSync } from 'node:fs';
+import { existsSync, readdirSync, rmSync, statSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
+import bundle from './engine-bundle.cjs';
 
-const SOURCE_DIRS = ['lib/resampling', 'lib/compute', 'lib/build'];
-const EXTRA_FILES = ['package-lock.json', 'tsconfig.json'];
-export const BUNDLE_DIR = 'dist/engine';
-export const ENTRIES = { worker: 'lib/compute/worker-entry.ts', cli: 'lib/compute/cli.ts' };
-const WORKER_FILE = 'worker.cjs';
-const CLI_FILE = 'cli.cjs';
-const CLI_CACHE = 'cli.cjs.cache';
-/** Files of older layouts (an ES-module command line in chunks) are removed once they are this old. */
-const STALE_FILE_MS = 60 * 60 * 1000;
-
-/** Project root: the folder holding lib/compute/build-engine.mjs. */
-export function projectRoot() {
-  return path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
-}
-
-function listSources(root) {
-  const files = [];
-  const walk = (dir) => {
-    let entries;
-    try {
-      entries = readdirSync(`${root}/${dir}`, { withFileTypes: true });
-    } catch {
-      return;
-    }
-    for (const e of entries) {
-      const rel = `${dir}/${e.name}`;
-      if (e.isDirectory()) walk(rel);
-      else if (/\.(ts|mjs|js|json)$/.test(e.name) && !/\.test\.ts$/.test(e.name)) files.push(rel);
-    }
-  };
-  for (const d of SOURCE_DIRS) walk(d);
-  for (const f of EXTRA_FILES) if (existsSync(`${root}/${f}`)) files.push(f);
-  return files.sort();
-}
-
-/**
- * Signature of the sources: one line of path, size and mtime per file, so it changes whenever
- * a file is added, removed or modified. Kept as text (a few kilobytes) and compared whole —
- * exact, and no hash module to load on each start of the command line.
- */
-export function sourceSignature(root = projectRoot()) {
-  let text = '';
-  // Paths joined as text, not with path.join: the command line runs this on every start, and
-  // path.join's normalization, called for each of ~160 files, was hot enough for V8 to compile
-  // it optimized on its one background thread (~20 ms of CPU there, beside the draws).
-  for (const f of listSources(root)) {
-    const s = statSync(`${root}/${f}`);
-    text += `${f}:${s.size}:${s.mtimeMs}\n`;
-  }
-  return text;
-}
-
-export function bundlePaths(root = projectRoot()) {
-  const dir = path.join(root, BUNDLE_DIR);
-  return { dir, worker: path.join(dir, WORKER_FILE), cli: path.join(dir, CLI_FILE), cliCache: path.join(dir, CLI_CACHE), stamp: path.join(dir, 'stamp.json') };
-}
-
-export function isFresh(root = projectRoot()) {
-  const p = bundlePaths(root);
-  let stamp;
-  try {
-    stamp = JSON.parse(readFileSync(p.stamp, 'utf8'));
-  } catch {
-    return false;
-  }
-  if (!Array.isArray(stamp.files) || !stamp.files.every((f) => existsSync(path.join(p.dir, f)))) return false;
-  // Without sources (a deployment of dist/ only) the bundle is all there is.
-  if (!existsSync(path.join(root, ENTRIES.worker))) return true;
-  return stamp.signature === sourceSignature(root);
-}
+const { BUNDLE_DIR, ENTRIES, CLI_FILE, CLI_CACHE, STALE_FILE_MS, projectRoot, sourceSignature, bundlePaths, isFresh } = bundle;
+export { BUNDLE_DIR, ENTRIES, projectRoot, sourceSignature, bundlePaths, isFresh };
 
 /** zod for the worker bundle: every export of the real package, each an inert chainable stand-in. */
 async function inertZod() {
@@ -127,14 +61,14 @@ function warmUpRequest() {
 }
 
 /**
- * Writes the command line's code cache (code-cache.mjs) by running the new bundle once on the
+ * Writes the command line's code cache (code-cache.cjs) by running the new bundle once on the
  * warm-up request. A failure leaves no cache, which only makes starts slower: say so, go on.
  */
 async function writeCodeCache(dir) {
   // node:child_process only here, when building: the freshness check runs on every start of the
   // command line, and loading that module cost it ~2–3 ms.
   const { spawnSync } = await import('node:child_process');
-  const r = spawnSync(process.execPath, [fileURLToPath(new URL('./code-cache.mjs', import.meta.url)), '--write', path.join(dir, CLI_FILE), path.join(dir, CLI_CACHE), '-', '--threads', '0'], {
+  const r = spawnSync(process.execPath, [fileURLToPath(new URL('./code-cache.cjs', import.meta.url)), '--write', path.join(dir, CLI_FILE), path.join(dir, CLI_CACHE), '-', '--threads', '0'], {
     input: warmUpRequest(),
     encoding: 'utf8',
     timeout: 60_000,

@@ -4,11 +4,11 @@
  * stdout and exits 1 (2 for a usage error, 3 for an internal error). Options:
  * `--threads N` (worker threads besides this one, which draws too; 0 = this thread only;
  * default one per core but one), `--pretty`, `--progress` (progress lines on stderr).
- * Bundled to dist/engine/cli.cjs and started by scripts/compute.mjs.
+ * Bundled to dist/engine/cli.cjs and started by scripts/compute.cjs.
  */
 import { readFileSync } from 'node:fs';
 import { EngineError } from '@/lib/resampling/errors';
-import { takeEarlyRequest } from './early-worker.mjs';
+import { takeEarlyRequest } from './early-worker.cjs';
 import { defaultWorkers, looksLarge, prewarmCompute } from './shared-pool';
 import { trace } from './trace';
 
@@ -41,7 +41,7 @@ export async function main(argv: string[]): Promise<void> {
 
   trace('cli:start');
   let input: unknown;
-  // The launcher may have parsed the file already (early-worker.mjs).
+  // The launcher may have parsed the file already (early-worker.cjs).
   const early = file === '-' ? null : takeEarlyRequest(file);
   if (early) {
     input = early.input;

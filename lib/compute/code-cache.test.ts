@@ -6,7 +6,7 @@ import { promisify } from 'node:util';
 import { afterAll, describe, expect, it } from 'vitest';
 
 const run = promisify(execFile);
-const loader = path.join(process.cwd(), 'lib/compute/code-cache.mjs');
+const loader = path.join(process.cwd(), 'lib/compute/code-cache.cjs');
 const dir = mkdtempSync(path.join(tmpdir(), 'margin-code-cache-'));
 const bundle = path.join(dir, 'bundle.cjs');
 const cache = `${bundle}.cache`;
@@ -26,7 +26,7 @@ console.log(JSON.stringify({ rejected: s.cachedDataRejected ?? null }));`;
 
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
-describe('the command line code cache (code-cache.mjs)', () => {
+describe('the command line code cache (code-cache.cjs)', () => {
   it('--write runs the bundle with the given arguments, then writes a cache that V8 accepts', async () => {
     const { stdout } = await run(process.execPath, [loader, '--write', bundle, cache, 'x', '--y']);
     expect(JSON.parse(stdout)).toEqual({ args: ['x', '--y'], twice: 42, file: bundle, exported: 'object' });

@@ -101,7 +101,7 @@ describe('compute() in worker threads', () => {
 describe('command line', () => {
   const cli = (args: string[], input?: string) =>
     new Promise<{ code: number; stdout: string }>((resolve) => {
-      const child = execFile(process.execPath, [path.join(root, 'scripts/compute.mjs'), ...args], { cwd: root, maxBuffer: 64 * 1024 * 1024 }, (err, stdout) => {
+      const child = execFile(process.execPath, [path.join(root, 'scripts/compute.cjs'), ...args], { cwd: root, maxBuffer: 64 * 1024 * 1024 }, (err, stdout) => {
         resolve({ code: err ? ((err as { code?: number }).code ?? 1) : 0, stdout });
       });
       if (input !== undefined) child.stdin!.end(input);
@@ -136,7 +136,7 @@ describe('command line', () => {
     const file = path.join(tmpdir(), `margin-cli-early-${process.pid}.json`);
     writeFileSync(file, JSON.stringify(big));
     const traced = await new Promise<{ stdout: string; stderr: string }>((resolve, reject) => {
-      execFile(process.execPath, [path.join(root, 'scripts/compute.mjs'), file], { cwd: root, env: { ...process.env, MARGIN_TRACE: '1' }, maxBuffer: 64 * 1024 * 1024 }, (err, stdout, stderr) =>
+      execFile(process.execPath, [path.join(root, 'scripts/compute.cjs'), file], { cwd: root, env: { ...process.env, MARGIN_TRACE: '1' }, maxBuffer: 64 * 1024 * 1024 }, (err, stdout, stderr) =>
         err ? reject(err) : resolve({ stdout, stderr }),
       );
     });
@@ -151,7 +151,7 @@ describe('command line', () => {
     const small = path.join(tmpdir(), `margin-cli-small-${process.pid}.json`);
     writeFileSync(small, JSON.stringify({ ...big, B: 100 }));
     const quiet = await new Promise<string>((resolve, reject) => {
-      execFile(process.execPath, [path.join(root, 'scripts/compute.mjs'), small], { cwd: root, env: { ...process.env, MARGIN_TRACE: '1' } }, (err, _stdout, stderr) => (err ? reject(err) : resolve(stderr)));
+      execFile(process.execPath, [path.join(root, 'scripts/compute.cjs'), small], { cwd: root, env: { ...process.env, MARGIN_TRACE: '1' } }, (err, _stdout, stderr) => (err ? reject(err) : resolve(stderr)));
     });
     expect(quiet).not.toContain('launcher:early-worker');
     expect(quiet).toContain('cli:request-from-launcher');
@@ -173,7 +173,7 @@ describe('command line', () => {
     expect(stdout.trim()).toBe(path.join(root, 'dist/engine'));
     const { isFresh, bundlePaths } = await import('./build-engine.mjs' as string);
     expect(isFresh(root)).toBe(true);
-    // The build leaves the command line's code cache beside it (code-cache.mjs).
+    // The build leaves the command line's code cache beside it (code-cache.cjs).
     expect(statSync(bundlePaths(root).cliCache).size).toBeGreaterThan(10_000);
   }, 60_000);
 });

@@ -3,7 +3,7 @@ import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
 import type { EngineRequest } from '@/lib/resampling';
 import { EngineError } from '@/lib/resampling/errors';
-import { takeEarlyWorker } from './early-worker.mjs';
+import { takeEarlyWorker } from './early-worker.cjs';
 import { CLAIMED, FINISHED, type FromWorker, type JobBuffers, type ToWorker } from './protocol';
 import { traced } from './trace';
 
@@ -182,7 +182,7 @@ export class EnginePool {
   }
 
   private spawn(): Slot {
-    // The command line's launcher may have started one already (early-worker.mjs).
+    // The command line's launcher may have started one already (early-worker.cjs).
     const early = takeEarlyWorker(this.file);
     const worker = early?.worker ?? new Worker(this.file);
     const slot: Slot = { worker, isReady: early?.isReady() ?? false, job: null };

@@ -1,27 +1,29 @@
+'use strict';
 // Starting the engine's worker thread as early as possible on the command line, and reading the
 // request only once. A worker
 // thread takes ~50–80 ms to start here (Node's own start-up in the new thread, then the worker
 // bundle), and on the benchmark request the main thread is drawing replicates ~55 ms after the
 // engine bundle starts; a worker started by the bundle joined late and drew only a few chunks.
-// So the launcher (scripts/compute.mjs) starts it first thing, before it checks that the
+// So the launcher (scripts/compute.cjs) starts it first thing, before it checks that the
 // bundles are fresh and loads the engine, when the request file looks large; the pool
 // (pool.ts) adopts it as its first worker. The request it parsed to decide is handed to the
 // command line (cli.ts), which would otherwise read and parse it again (for a large file,
 // parsing is most of a second). Plain JavaScript because the launcher runs it
-// before anything is built; shared-pool.ts takes INLINE_DRAWS and looksLarge from here too.
-import { readFileSync } from 'node:fs';
-import { availableParallelism } from 'node:os';
-import { Worker } from 'node:worker_threads';
+// before anything is built, and CommonJS because the launcher is (scripts/compute.cjs);
+// shared-pool.ts takes INLINE_DRAWS and looksLarge from here too.
+const { readFileSync } = require('node:fs');
+const { availableParallelism } = require('node:os');
+const { Worker } = require('node:worker_threads');
 
 /** Below this many index draws a job runs on the calling thread (starting workers would cost more). */
-export const INLINE_DRAWS = 2_000_000;
+const INLINE_DRAWS = 2_000_000;
 
 /**
  * A cheap guess, before validation, whether a request will go to worker threads: B times
  * the longest data column against INLINE_DRAWS. Only decides whether to start workers
  * early; compute() decides from the prepared request.
  */
-export function looksLarge(input) {
+function looksLarge(input) {
   if (!input || typeof input !== 'object') return false;
   const { B, data } = input;
   if (typeof B !== 'number' || !data || typeof data !== 'object') return false;
@@ -41,7 +43,7 @@ const REQUEST_KEY = Symbol.for('margin.engine.earlyRequest');
  * unreadable file, broken JSON — keeps and starts nothing: the command line then reads the
  * request itself and reports what is wrong, as before.
  */
-export function startEarly(argv, workerFile) {
+function startEarly(argv, workerFile) {
   let file = null;
   let noWorkers = false;
   for (let i = 0; i < argv.length; i++) {
@@ -71,23 +73,25 @@ export function startEarly(argv, workerFile) {
 }
 
 /** The launcher: the worker bundle is not the one the early worker runs (it was rebuilt). */
-export function dropEarlyWorker() {
+function dropEarlyWorker() {
   const early = globalThis[KEY];
   globalThis[KEY] = undefined;
   if (early) void early.worker.terminate();
 }
 
 /** The command line: the request the launcher parsed from `file`, as { input } (once), else null. */
-export function takeEarlyRequest(file) {
+function takeEarlyRequest(file) {
   const early = globalThis[REQUEST_KEY];
   globalThis[REQUEST_KEY] = undefined;
   return early && early.file === file ? { input: early.input } : null;
 }
 
 /** The pool: the early worker when it runs this worker bundle (once), else null. */
-export function takeEarlyWorker(file) {
+function takeEarlyWorker(file) {
   const early = globalThis[KEY];
   if (!early || early.file !== file) return null;
   globalThis[KEY] = undefined;
   return early;
 }
+
+module.exports = { INLINE_DRAWS, looksLarge, startEarly, dropEarlyWorker, takeEarlyRequest, takeEarlyWorker };

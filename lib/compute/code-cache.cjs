@@ -1,3 +1,4 @@
+'use strict';
 // Runs a CommonJS bundle with V8's code cache: the bytecode of every function compiled during a
 // warm-up run, saved next to the bundle by the build (build-engine.mjs), so that a later start
 // neither parses the bundle nor compiles the functions the warm-up reached. Node 20 keeps no
@@ -7,20 +8,21 @@
 // A cache that V8 rejects (another Node or V8 version, other V8 flags, a changed bundle) is
 // ignored and the bundle compiles as usual: the cache can make a start faster, never wrong.
 //
-//   node lib/compute/code-cache.mjs --write BUNDLE CACHE [ARGS…]
+// CommonJS, as the launcher that loads it (scripts/compute.cjs).
+//
+//   node lib/compute/code-cache.cjs --write BUNDLE CACHE [ARGS…]
 //     runs BUNDLE with ARGS as its command line and, when it exits, writes CACHE.
-import { readFileSync, writeFileSync } from 'node:fs';
-import { createRequire } from 'node:module';
-import path from 'node:path';
-import { pathToFileURL } from 'node:url';
-import vm from 'node:vm';
+const { readFileSync, writeFileSync } = require('node:fs');
+const { createRequire } = require('node:module');
+const path = require('node:path');
+const vm = require('node:vm');
 
 /**
  * Runs `bundle` (CommonJS) in this context with its own module object, using `cacheFile` when
  * it is given and there. Returns the compiled script, whose createCachedData() includes
  * whatever has been compiled by the time it is called.
  */
-export function runWithCodeCache(bundle, cacheFile) {
+function runWithCodeCache(bundle, cacheFile) {
   const file = path.resolve(bundle);
   const source = readFileSync(file, 'utf8');
   let cachedData;
@@ -38,10 +40,12 @@ export function runWithCodeCache(bundle, cacheFile) {
   return script;
 }
 
-if (process.argv[1] && pathToFileURL(path.resolve(process.argv[1])).href === import.meta.url) {
+module.exports = { runWithCodeCache };
+
+if (require.main === module) {
   const [flag, bundle, cache, ...args] = process.argv.slice(2);
   if (flag !== '--write' || !bundle || !cache) {
-    process.stderr.write('usage: node lib/compute/code-cache.mjs --write BUNDLE CACHE [ARGS…]\n');
+    process.stderr.write('usage: node lib/compute/code-cache.cjs --write BUNDLE CACHE [ARGS…]\n');
     process.exit(2);
   }
   // The bundle reads its arguments from process.argv.slice(2), as when it is started itself.
