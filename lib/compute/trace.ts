@@ -4,12 +4,15 @@
  * epoch milliseconds (performance.timeOrigin + performance.now()), so marks from worker threads
  * and from a parent process that started the command line fall on one clock. bench/README.md
  * shows how the benchmark's timeline was read from them. Off by default: one environment
- * read per thread.
+ * read per thread. Written straight to file descriptor 2: a worker thread's process.stderr
+ * goes through the main thread, and its last lines were lost when the worker was stopped.
  */
+import { writeSync } from 'node:fs';
+
 const on = process.env.MARGIN_TRACE === '1';
 
 export function trace(label: string): void {
-  if (on) process.stderr.write(`${label} ${(performance.timeOrigin + performance.now()).toFixed(1)}\n`);
+  if (on) writeSync(2, `${label} ${(performance.timeOrigin + performance.now()).toFixed(1)}\n`);
 }
 
 /** Runs f and, when tracing, marks its end with its duration. */
