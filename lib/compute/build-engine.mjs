@@ -26,18 +26,22 @@ import bundle from './engine-bundle.cjs';
 const { BUNDLE_DIR, ENTRIES, CLI_FILE, CLI_CACHE, STALE_FILE_MS, projectRoot, sourceSignature, bundlePaths, isFresh } = bundle;
 export { BUNDLE_DIR, ENTRIES, projectRoot, sourceSignature, bundlePaths, isFresh };
 
-/** zod for the worker bundle: every export of the real package, each an inert chainable stand-in. */
+/**
+ * zod for the worker bundle: every export of the real package (zod/mini and zod/locales, as the
+ * engine imports them), each an inert chainable stand-in.
+ */
 async function inertZod() {
-  const names = Object.keys(await import('zod')).filter((n) => n !== 'default');
-  const contents = `const refuse = () => { throw new Error('zod is not loaded in the engine worker: requests are validated on the main thread'); };
+  const specifiers = ['zod', 'zod/mini', 'zod/locales'];
+  const names = Object.fromEntries(await Promise.all(specifiers.map(async (spec) => [spec, Object.keys(await import(spec)).filter((n) => n !== 'default')])));
+  const contents = (spec) => `const refuse = () => { throw new Error('zod is not loaded in the engine worker: requests are validated on the main thread'); };
 const inert = new Proxy(function () {}, { get: (_t, key) => (key === 'parse' || key === 'safeParse' || key === 'parseAsync' || key === 'safeParseAsync' ? refuse : inert), apply: () => inert });
-export { ${names.map((n) => `inert as ${n}`).join(', ')} };
+export { ${names[spec].map((n) => `inert as ${n}`).join(', ')} };
 export default inert;`;
   return {
     name: 'inert-zod',
     setup(b) {
-      b.onResolve({ filter: /^zod$/ }, () => ({ path: 'zod', namespace: 'inert-zod' }));
-      b.onLoad({ filter: /.*/, namespace: 'inert-zod' }, () => ({ contents, loader: 'js' }));
+      b.onResolve({ filter: /^zod(\/mini|\/locales)?$/ }, (args) => ({ path: args.path, namespace: 'inert-zod' }));
+      b.onLoad({ filter: /.*/, namespace: 'inert-zod' }, (args) => ({ contents: contents(args.path), loader: 'js' }));
     },
   };
 }

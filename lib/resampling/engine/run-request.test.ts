@@ -106,6 +106,12 @@ describe('bad input: a clear EngineError naming the field', () => {
     });
   }
 
+  it("fields without a message of the engine's own get zod's English one, naming what is wrong (zod/mini loads no locale itself)", () => {
+    expect(errorOf({ ...base, replicates: 5 }).message).toBe('Unrecognized key: "replicates"');
+    expect(errorOf({ ...base, include: 'jackknife' }).message).toBe('include: Invalid input: expected array, received string');
+    expect(errorOf({ ...base, statistic: { name: 'mean', column: 'x', trim: 0.1 } }).message).toBe('statistic: Unrecognized key: "trim"');
+  });
+
   it('allows B = 100,000 and n·B = 10⁹ (checked without running)', () => {
     const req = parseRequest({ data: { x: Array.from({ length: 10_000 }, (_, i) => i) }, statistic: { name: 'mean', column: 'x' }, B: 100_000 });
     expect(req.B).toBe(100_000);

@@ -1,4 +1,4 @@
-import * as z from 'zod';
+import * as z from 'zod/mini';
 
 /**
  * Hypothesis tests a request may add (PRODUCT.md: `"test": { "name": "permutation", … }`):
@@ -6,7 +6,7 @@ import * as z from 'zod';
  * - bootstrap-mean: H₀ mean = nullValue, for the mean statistic (Efron & Tibshirani 1993,
  *   Algorithm 16.2).
  */
-const alternative = z.enum(['two-sided', 'less', 'greater'], { error: 'test.alternative must be two-sided, less or greater' }).default('two-sided');
+const alternative = z._default(z.enum(['two-sided', 'less', 'greater'], { error: 'test.alternative must be two-sided, less or greater' }), 'two-sided');
 
 export const testSchema = z.discriminatedUnion(
   'name',
@@ -14,7 +14,7 @@ export const testSchema = z.discriminatedUnion(
     z.strictObject({ name: z.literal('permutation'), alternative }),
     z.strictObject({
       name: z.literal('bootstrap-mean'),
-      nullValue: z.number({ error: 'test.nullValue must be a number (the mean under the null hypothesis)' }).refine(Number.isFinite, 'test.nullValue must be finite'),
+      nullValue: z.number({ error: 'test.nullValue must be a number (the mean under the null hypothesis)' }).check(z.refine(Number.isFinite, 'test.nullValue must be finite')),
       alternative,
     }),
   ],

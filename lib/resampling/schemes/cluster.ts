@@ -1,4 +1,4 @@
-import * as z from 'zod';
+import * as z from 'zod/mini';
 import { EngineError } from '../errors';
 import { columnName } from '../statistics/fields';
 import { strataFromKeys } from './counting';
@@ -16,7 +16,7 @@ import { defineScheme, type SchemeContext } from './types';
 const schema = z.strictObject({
   name: z.literal('cluster'),
   by: columnName,
-  secondStage: z.boolean({ error: 'secondStage must be true or false' }).default(false),
+  secondStage: z._default(z.boolean({ error: 'secondStage must be true or false' }), false),
 });
 
 export const cluster = defineScheme({

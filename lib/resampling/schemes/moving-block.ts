@@ -1,4 +1,4 @@
-import * as z from 'zod';
+import * as z from 'zod/mini';
 import { movingBlockMeanFromStarts } from '../structured/block-sums';
 import { addMovingBlockCountsFromStarts, blockCount } from '../structured/moving-block-counts';
 import { chooseBlockLength } from './block-length-choice';
@@ -17,11 +17,12 @@ import { defineScheme } from './types';
  */
 const schema = z.strictObject({
   name: z.literal('moving-block'),
-  blockLength: z
-    .union([z.number().int('blockLength must be a whole number').min(1, 'blockLength must be at least 1'), z.literal('auto')], {
+  blockLength: z._default(
+    z.union([z.number().check(z.int('blockLength must be a whole number'), z.gte(1, 'blockLength must be at least 1')), z.literal('auto')], {
       error: 'blockLength must be a whole number of rows or "auto"',
-    })
-    .default('auto'),
+    }),
+    'auto',
+  ),
 });
 
 export const movingBlock = defineScheme({

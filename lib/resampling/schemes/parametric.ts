@@ -1,4 +1,4 @@
-import * as z from 'zod';
+import * as z from 'zod/mini';
 import { EngineError } from '../errors';
 import { FAMILIES, FitError, type FittedModel, fitFamily } from '../fit';
 import { simulate } from '../fit/simulate';

@@ -1,4 +1,4 @@
-import * as z from 'zod';
+import * as z from 'zod/mini';
 import { cluster } from './cluster';
 import { movingBlock } from './moving-block';
 import { ordinary } from './ordinary';

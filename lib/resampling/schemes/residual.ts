@@ -1,4 +1,4 @@
-import * as z from 'zod';
+import * as z from 'zod/mini';
 import { EngineError } from '../errors';
 import type { StatisticData } from '../statistics/types';
 import { leastSquaresLine } from '../structured/least-squares-line';
@@ -16,7 +16,7 @@ import { defineScheme } from './types';
  */
 const schema = z.strictObject({
   name: z.literal('residual'),
-  residuals: z.enum(['modified', 'raw'], { error: 'residuals must be modified or raw' }).default('modified'),
+  residuals: z._default(z.enum(['modified', 'raw'], { error: 'residuals must be modified or raw' }), 'modified'),
 });
 
 const REGRESSION = ['regression-slope', 'regression-intercept'];

@@ -1,4 +1,4 @@
-import * as z from 'zod';
+import * as z from 'zod/mini';
 import { stationaryMean } from '../structured/block-sums';
 import { addStationaryCounts } from '../structured/stationary-counts';
 import { chooseBlockLength } from './block-length-choice';
@@ -15,9 +15,10 @@ import { defineScheme } from './types';
  */
 const schema = z.strictObject({
   name: z.literal('stationary'),
-  meanBlockLength: z
-    .union([z.number().min(1, 'meanBlockLength must be at least 1'), z.literal('auto')], { error: 'meanBlockLength must be a number of rows (at least 1) or "auto"' })
-    .default('auto'),
+  meanBlockLength: z._default(
+    z.union([z.number().check(z.gte(1, 'meanBlockLength must be at least 1')), z.literal('auto')], { error: 'meanBlockLength must be a number of rows (at least 1) or "auto"' }),
+    'auto',
+  ),
 });
 
 export const stationary = defineScheme({

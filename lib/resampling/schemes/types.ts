@@ -1,4 +1,4 @@
-import type { z } from 'zod';
+import type * as z from 'zod/mini';
 import type { Rng } from '../random/rng';
 import type { PreparedStatistic, StatisticData } from '../statistics/types';
 
@@ -64,7 +64,7 @@ export interface PreparedScheme {
   readonly details?: Record<string, unknown>;
 }
 
-export interface SchemeDefinition<S extends { name: string } = { name: string }, T extends z.ZodType = z.ZodType> {
+export interface SchemeDefinition<S extends { name: string } = { name: string }, T extends z.ZodMiniType = z.ZodMiniType> {
   readonly name: S['name'];
   readonly schema: T;
   /** Label columns the scheme reads (e.g. `by`), with the request field naming each. */
@@ -72,6 +72,6 @@ export interface SchemeDefinition<S extends { name: string } = { name: string },
   prepare(ctx: SchemeContext, settings: S): PreparedScheme;
 }
 
-export function defineScheme<T extends z.ZodObject<{ name: z.ZodLiteral<string> }>>(def: SchemeDefinition<z.output<T>, T>): SchemeDefinition<z.output<T>, T> {
+export function defineScheme<T extends z.ZodMiniObject<{ name: z.ZodMiniLiteral<string> }>>(def: SchemeDefinition<z.output<T>, T>): SchemeDefinition<z.output<T>, T> {
   return def;
 }

@@ -1,4 +1,4 @@
-import * as z from 'zod';
+import * as z from 'zod/mini';
 import { columnName } from './fields';
 import { sortUnits } from './sort-units';
 import { defineStatistic } from './types';
@@ -18,7 +18,7 @@ const schema = z.strictObject({
   name: z.literal('correlation'),
   x: columnName,
   y: columnName,
-  method: z.enum(['pearson', 'spearman'], { error: 'method must be pearson or spearman' }).default('pearson'),
+  method: z._default(z.enum(['pearson', 'spearman'], { error: 'method must be pearson or spearman' }), 'pearson'),
 });
 
 function pearson(x: Float64Array, y: Float64Array, counts: Int32Array, total: number): number {

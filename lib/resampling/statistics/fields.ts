@@ -1,10 +1,12 @@
-import * as z from 'zod';
+import * as z from 'zod/mini';
 
 /** A column name in the request's data. */
-export const columnName = z.string({ error: 'give a column name' }).min(1, 'give a column name');
+export const columnName = z.string({ error: 'give a column name' }).check(z.minLength(1, 'give a column name'));
 
 /** The two levels of a grouping column, [a, b] → statistic(a) − statistic(b). */
 export const twoLevels = z
-  .tuple([z.union([z.string(), z.number()]), z.union([z.string(), z.number()])], { error: 'give the two group levels as [a, b]' })
-  .transform(([a, b]) => [String(a), String(b)] as [string, string])
-  .refine(([a, b]) => a !== b, 'the two levels must differ');
+  .pipe(
+    z.tuple([z.union([z.string(), z.number()]), z.union([z.string(), z.number()])], { error: 'give the two group levels as [a, b]' }),
+    z.transform(([a, b]) => [String(a), String(b)] as [string, string]),
+  )
+  .check(z.refine(([a, b]) => a !== b, 'the two levels must differ'));

@@ -1,4 +1,4 @@
-import * as z from 'zod';
+import * as z from 'zod/mini';
 import { medianFromCounts } from './count-scan';
 import { columnName } from './fields';
 import { sortUnits } from './sort-units';

@@ -1,4 +1,4 @@
-import * as z from 'zod';
+import * as z from 'zod/mini';
 import { quantileFromCounts } from './count-scan';
 import { columnName } from './fields';
 import { sortUnits } from './sort-units';
@@ -17,7 +17,7 @@ import { onesCounts } from './weighted-sums';
 const schema = z.strictObject({
   name: z.literal('quantile'),
   column: columnName,
-  p: z.number({ error: 'p must be a number between 0 and 1' }).min(0, 'p must be between 0 and 1').max(1, 'p must be between 0 and 1'),
+  p: z.number({ error: 'p must be a number between 0 and 1' }).check(z.gte(0, 'p must be between 0 and 1'), z.lte(1, 'p must be between 0 and 1')),
 });
 
 export const quantile = defineStatistic({

@@ -1,4 +1,4 @@
-import * as z from 'zod';
+import * as z from 'zod/mini';
 import { correlation } from './correlation';
 import { cv } from './cv';
 import { geometricMean } from './geometric-mean';

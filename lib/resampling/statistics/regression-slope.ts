@@ -1,4 +1,4 @@
-import * as z from 'zod';
+import * as z from 'zod/mini';
 import { columnName } from './fields';
 import { slopeFromCounts } from './regression';
 import { defineStatistic } from './types';

@@ -1,4 +1,4 @@
-import * as z from 'zod';
+import * as z from 'zod/mini';
 import { columnName } from './fields';
 import { defineStatistic } from './types';
 import { varianceFromCounts } from './variance';

@@ -1,4 +1,4 @@
-import * as z from 'zod';
+import * as z from 'zod/mini';
 import { columnName } from './fields';
 import { sortUnits } from './sort-units';
 import { defineStatistic } from './types';
@@ -16,8 +16,7 @@ const schema = z.strictObject({
   column: columnName,
   trim: z
     .number({ error: 'trim must be a number from 0 to below 0.5' })
-    .min(0, 'trim must be from 0 to below 0.5')
-    .lt(0.5, 'trim must be below 0.5 (0.5 would be the median)'),
+    .check(z.gte(0, 'trim must be from 0 to below 0.5'), z.lt(0.5, 'trim must be below 0.5 (0.5 would be the median)')),
 });
 
 export const trimmedMean = defineStatistic({

@@ -1,4 +1,4 @@
-import * as z from 'zod';
+import * as z from 'zod/mini';
 import { columnName, twoLevels } from './fields';
 import type { GroupNeed } from './types';
 

@@ -1,4 +1,4 @@
-import type { z } from 'zod';
+import type * as z from 'zod/mini';
 
 /**
  * How statistics plug into the engine. A statistic is one file exporting a
@@ -62,7 +62,7 @@ export interface PreparedStatistic {
   closedForm?(): { se: number; bias: number; method: string } | null;
 }
 
-export interface StatisticDefinition<S extends { name: string } = { name: string }, T extends z.ZodType = z.ZodType> {
+export interface StatisticDefinition<S extends { name: string } = { name: string }, T extends z.ZodMiniType = z.ZodMiniType> {
   readonly name: S['name'];
   readonly schema: T;
   /** Numeric columns it reads. */
@@ -86,6 +86,6 @@ export interface StatisticDefinition<S extends { name: string } = { name: string
 }
 
 /** Helper so each file can declare its definition with full typing. */
-export function defineStatistic<T extends z.ZodObject<{ name: z.ZodLiteral<string> }>>(def: StatisticDefinition<z.output<T>, T>): StatisticDefinition<z.output<T>, T> {
+export function defineStatistic<T extends z.ZodMiniObject<{ name: z.ZodMiniLiteral<string> }>>(def: StatisticDefinition<z.output<T>, T>): StatisticDefinition<z.output<T>, T> {
   return def;
 }
