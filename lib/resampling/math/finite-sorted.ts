@@ -2,8 +2,8 @@
  * The finite values of `x`, ascending (a new array; NaN and ±Infinity left out). Replicates
  * are sorted this way before every quantile and moment. A plain loop rather than
  * `x.filter(Number.isFinite)`: filter calls its callback once per element, and in a short
- * process that callback is never optimized — ~3 ms for 10⁴ replicates here against well under
- * a tenth of that for the loop, on the command line's path after the draws.
+ * process that callback is never optimized. Measured in a fresh process here, 10⁴ values
+ * filtered and sorted: ~3.4 ms with filter, ~2.1 ms with the loop (most of it the sort).
  */
 export function finiteSorted(x: Float64Array): Float64Array {
   let k = 0;

@@ -9,7 +9,7 @@ import { SORT_POSITIONS_WASM } from './sort-positions-wasm';
  *
  * Example: sortUnits([3, 1, 2]) → sorted [1, 2, 3], order [1, 2, 0].
  *
- * How: from WASM_MIN_KEYS keys up, a radix sort in WebAssembly (sort-positions.wat, sortInWasm).
+ * How: from WASM_MIN_KEYS keys up, a radix sort in WebAssembly (sort-positions.wat, wasmSorter).
  * Below that, or without WebAssembly: the values are sorted by the typed array's own sort (no
  * comparator called from JavaScript), then each unit, in ascending unit order, takes the next
  * free place among the positions of its value (a binary search for the first one) — the same
