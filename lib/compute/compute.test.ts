@@ -143,8 +143,11 @@ describe('command line', () => {
     expect(traced.stdout.trim()).toBe(JSON.stringify(runRequest(big)));
     const marks = traced.stderr.split('\n');
     expect(marks.filter((l) => l.startsWith('launcher:early-worker '))).toHaveLength(1);
-    // adopted by the pool: no second worker was started
-    expect(marks.filter((l) => l.startsWith('worker:loaded '))).toHaveLength(1);
+    // adopted by the pool: no second worker was started (whether the worker got to load before
+    // this thread had drawn every chunk depends on the machine's load, so that is not asserted)
+    expect(marks.filter((l) => l.startsWith('pool:adopted-early-worker '))).toHaveLength(1);
+    expect(marks.filter((l) => l.startsWith('pool:started-worker '))).toHaveLength(0);
+    expect(marks.filter((l) => l.startsWith('worker:loaded ')).length).toBeLessThanOrEqual(1);
     // the command line did not read and parse the file again
     expect(marks.filter((l) => l.startsWith('cli:request-from-launcher '))).toHaveLength(1);
     // a small request starts none

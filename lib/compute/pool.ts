@@ -5,7 +5,7 @@ import type { EngineRequest } from '@/lib/resampling';
 import { EngineError } from '@/lib/resampling/errors';
 import { takeEarlyWorker } from './early-worker.cjs';
 import { CLAIMED, FINISHED, type FromWorker, type JobBuffers, type ToWorker } from './protocol';
-import { traced } from './trace';
+import { trace, traced } from './trace';
 
 export interface Drawn {
   theta: Float64Array;
@@ -185,6 +185,7 @@ export class EnginePool {
     // The command line's launcher may have started one already (early-worker.cjs).
     const early = takeEarlyWorker(this.file);
     const worker = early?.worker ?? new Worker(this.file);
+    trace(early ? 'pool:adopted-early-worker' : 'pool:started-worker');
     const slot: Slot = { worker, isReady: early?.isReady() ?? false, job: null };
     worker.unref();
     worker.on('message', (msg: FromWorker) => {
