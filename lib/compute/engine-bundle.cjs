@@ -79,4 +79,5 @@ function isFresh(root = projectRoot()) {
   return stamp.signature === sourceSignature(root);
 }
 
-module.exports = { SOURCE_DIRS, BUNDLE_DIR, ENTRIES, WORKER_FILE, CLI_FILE, CLI_CACHE, STALE_FILE_MS, projectRoot, listSources, sourceSignature, bundlePaths, isFresh };
+// What build-engine.mjs and the launcher use.
+module.exports = { BUNDLE_DIR, ENTRIES, CLI_FILE, CLI_CACHE, STALE_FILE_MS, projectRoot, sourceSignature, bundlePaths, isFresh };
