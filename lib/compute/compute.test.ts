@@ -4,9 +4,10 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { promisify } from 'node:util';
 import { afterAll, describe, expect, it } from 'vitest';
-import { EngineError, runRequest } from '@/lib/resampling';
+import { EngineError, parseRequest, prepareProblem, runRequest } from '@/lib/resampling';
 import { everyStatistic } from '@/tests/support/statistics';
-import { closeComputePool, compute } from './index';
+import { guessDraws } from './early-worker.cjs';
+import { closeComputePool, compute, drawsOf } from './index';
 
 const run = promisify(execFile);
 const root = process.cwd();
@@ -17,6 +18,32 @@ const big = { data: { nitrate: daily }, statistic: { name: 'median', column: 'ni
 
 afterAll(async () => {
   await closeComputePool();
+});
+
+describe("the command line's guess of a request's work, before validation (early-worker.cjs)", () => {
+  it('is the work compute() counts from the prepared request, for every scheme that states its own', () => {
+    const n = 600;
+    const x = daily.slice(0, n);
+    const site = x.map((_, i) => `site ${Math.floor(i / 8)}`);
+    const g = x.map((_, i) => (Math.floor(i / 8) % 2 ? 'down' : 'up'));
+    const data = { x, site, g };
+    const diff = { name: 'mean-difference', column: 'x', group: 'g', levels: ['up', 'down'] };
+    const cases = [
+      { statistic: { name: 'median', column: 'x' } },
+      ...[{ name: 'mean' }, { name: 'median' }, { name: 'trimmed-mean', trim: 0.1 }].map((st) => ({ statistic: { ...st, column: 'x' }, scheme: { name: 'cluster', by: 'site' } })),
+      { statistic: diff, scheme: { name: 'cluster', by: 'site' } },
+      { statistic: { name: 'median', column: 'x' }, scheme: { name: 'cluster', by: 'site', secondStage: true } },
+      { statistic: { name: 'mean', column: 'x' }, scheme: { name: 'moving-block', blockLength: 20 } },
+      { statistic: { name: 'median', column: 'x' }, scheme: { name: 'moving-block', blockLength: 20 } },
+      { statistic: { name: 'mean', column: 'x' }, scheme: { name: 'stationary', meanBlockLength: 7.5 } },
+      { statistic: { name: 'mean', column: 'x' }, intervals: { methods: ['studentized'] } },
+      { statistic: { name: 'mean', column: 'x' }, intervals: { methods: ['percentile', 'studentized'], studentized: { se: 'bootstrap', innerB: 25 } } },
+    ];
+    for (const c of cases) {
+      const input = { data, B: 1000, ...c };
+      expect(guessDraws(input), JSON.stringify(c)).toBe(drawsOf(prepareProblem(parseRequest(input))));
+    }
+  });
 });
 
 describe('compute() in worker threads', () => {
@@ -134,13 +161,15 @@ describe('command line', () => {
 
   it('a large request from a file gets the worker the launcher started before loading the engine, and the request it parsed (one worker, one parse, same response)', async () => {
     const file = path.join(tmpdir(), `margin-cli-early-${process.pid}.json`);
-    writeFileSync(file, JSON.stringify(big));
+    // n·B = 3.15·10⁷ index draws: above the command line's worker threshold (early-worker.cjs)
+    const large = { ...big, B: 10_500 };
+    writeFileSync(file, JSON.stringify(large));
     const traced = await new Promise<{ stdout: string; stderr: string }>((resolve, reject) => {
       execFile(process.execPath, [path.join(root, 'scripts/compute.cjs'), file], { cwd: root, env: { ...process.env, MARGIN_TRACE: '1' }, maxBuffer: 64 * 1024 * 1024 }, (err, stdout, stderr) =>
         err ? reject(err) : resolve({ stdout, stderr }),
       );
     });
-    expect(traced.stdout.trim()).toBe(JSON.stringify(runRequest(big)));
+    expect(traced.stdout.trim()).toBe(JSON.stringify(runRequest(large)));
     const marks = traced.stderr.split('\n');
     expect(marks.filter((l) => l.startsWith('launcher:early-worker '))).toHaveLength(1);
     // adopted by the pool: no second worker was started (whether the worker got to load before

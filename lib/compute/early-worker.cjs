@@ -19,17 +19,55 @@ const { Worker } = require('node:worker_threads');
 const INLINE_DRAWS = 2_000_000;
 
 /**
- * A cheap guess, before validation, whether a request will go to worker threads: B times
- * the longest data column against INLINE_DRAWS. Only decides whether to start workers
- * early; compute() decides from the prepared request.
+ * The command line (which draws on its own thread too) uses a worker thread from this many
+ * index draws up. Its worker starts cold (~50–70 ms of Node's start-up in the new thread, on
+ * a core the main thread shares here), so it pays only for work that takes the main thread
+ * longer than that: on the benchmark's median (n = 10⁴, 2 vCPUs), medians of 21 interleaved
+ * runs with and without the worker: B = 3,000 (3·10⁷ draws) even, 6,000 −47 ms, 10,000
+ * −56 ms; the cluster median and mean of 500 clusters, B = 10⁴ (2·10⁷ by the schemes' own
+ * work estimate), +30 and +50 ms with it.
  */
-function looksLarge(input) {
-  if (!input || typeof input !== 'object') return false;
-  const { B, data } = input;
-  if (typeof B !== 'number' || !data || typeof data !== 'object') return false;
+const COMMAND_LINE_WORKER_DRAWS = 30_000_000;
+
+/**
+ * A cheap guess, before validation, of a request's work in index draws, as compute() counts
+ * it from the prepared request (drawsOf in index.ts): B replicates, each costing the longest
+ * data column's n draws or what the scheme states instead (workPerReplicate: 4 per cluster for
+ * the mean, median and difference of means under first-stage cluster resampling, 4 per block
+ * for the mean and difference of means under block schemes with a given block length), times
+ * 1 + the inner work of a studentized interval (innerB, or n for the jackknife).
+ * compute.test.ts checks that the two agree on such requests.
+ */
+function guessDraws(input) {
+  if (!input || typeof input !== 'object') return 0;
+  const { B, data, scheme, statistic, intervals } = input;
+  if (typeof B !== 'number' || !data || typeof data !== 'object') return 0;
   let n = 0;
   for (const column of Object.values(data)) if (Array.isArray(column)) n = Math.max(n, column.length);
-  return n * B >= INLINE_DRAWS;
+  const stat = statistic && typeof statistic === 'object' ? statistic.name : undefined;
+  let perReplicate = n;
+  if (scheme && typeof scheme === 'object') {
+    if (scheme.name === 'cluster' && scheme.secondStage !== true && (stat === 'mean' || stat === 'median' || stat === 'mean-difference') && Array.isArray(data[scheme.by])) {
+      perReplicate = 4 * new Set(data[scheme.by]).size;
+    }
+    const l = scheme.name === 'moving-block' ? scheme.blockLength : scheme.name === 'stationary' ? scheme.meanBlockLength : undefined;
+    if (typeof l === 'number' && l > 0 && (stat === 'mean' || stat === 'mean-difference')) perReplicate = 4 * Math.ceil(n / l);
+  }
+  let inner = 0;
+  if (intervals && typeof intervals === 'object' && Array.isArray(intervals.methods) && intervals.methods.includes('studentized')) {
+    const st = intervals.studentized && typeof intervals.studentized === 'object' ? intervals.studentized : {};
+    inner = st.se === 'bootstrap' ? (typeof st.innerB === 'number' ? st.innerB : 50) : n;
+  }
+  return perReplicate * B * (1 + inner);
+}
+
+/**
+ * Whether the command line should start a worker thread for this request (guessDraws against
+ * COMMAND_LINE_WORKER_DRAWS). Only decides whether to start one early; compute() decides from
+ * the prepared request.
+ */
+function looksLarge(input) {
+  return guessDraws(input) >= COMMAND_LINE_WORKER_DRAWS;
 }
 
 // The launcher and the engine bundle share no module instance: the worker and the request wait here.
@@ -94,4 +132,4 @@ function takeEarlyWorker(file) {
   return early;
 }
 
-module.exports = { INLINE_DRAWS, looksLarge, startEarly, dropEarlyWorker, takeEarlyRequest, takeEarlyWorker };
+module.exports = { INLINE_DRAWS, COMMAND_LINE_WORKER_DRAWS, guessDraws, looksLarge, startEarly, dropEarlyWorker, takeEarlyRequest, takeEarlyWorker };

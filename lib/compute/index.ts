@@ -3,7 +3,7 @@ import { chunkCount, chunkRange, drawAll, type EngineResponse, EngineError, fina
 import { needsInnerSe, runChunkInto } from '@/lib/resampling/replicates/run-chunk';
 import { dataDigest } from './data-digest';
 import type { Drawn } from './pool';
-import { closeComputePool, defaultWorkers, INLINE_DRAWS, poolFor, warmPoolFor } from './shared-pool';
+import { closeComputePool, COMMAND_LINE_WORKER_DRAWS, defaultWorkers, INLINE_DRAWS, poolFor, warmPoolFor } from './shared-pool';
 import { trace } from './trace';
 import { workerFile } from './worker-file';
 
@@ -62,7 +62,10 @@ export async function compute(input: unknown, opts: ComputeOptions = {}): Promis
     throw e;
   }
   if (signal?.aborted) throw abortReason(signal);
-  const threads = earlyJob ? -1 : (opts.threads ?? (drawsOf(problem) < INLINE_DRAWS ? 0 : defaultWorkers(opts.callerDraws === true)));
+  // Without workers below a size: a server's pool is started once and kept, the command line's
+  // would start cold for this one job (early-worker.cjs says when that pays).
+  const minDraws = opts.callerDraws === true ? COMMAND_LINE_WORKER_DRAWS : INLINE_DRAWS;
+  const threads = earlyJob ? -1 : (opts.threads ?? (drawsOf(problem) < minDraws ? 0 : defaultWorkers(opts.callerDraws === true)));
   let drawn: Drawn;
   let digest: string | undefined;
   if (earlyJob) {
@@ -114,7 +117,8 @@ function chunkSizes(B: number): number[] {
   });
 }
 
-function drawsOf(problem: Problem): number {
+/** The job's work in index draws (or what the scheme states a replicate costs instead); exported for a test. */
+export function drawsOf(problem: Problem): number {
   const { B, intervals } = problem.request;
   const inner = intervals.methods.includes('studentized') ? (intervals.studentized.se === 'bootstrap' ? intervals.studentized.innerB : problem.n) : 0;
   // a scheme with a cheaper replicate (block sums, cluster sums) says how much work one costs

@@ -8,7 +8,7 @@ import { EnginePool } from './pool';
  * line can start the workers before it loads the engine itself.
  */
 
-export { INLINE_DRAWS, looksLarge } from './early-worker.cjs';
+export { COMMAND_LINE_WORKER_DRAWS, INLINE_DRAWS, looksLarge } from './early-worker.cjs';
 
 let pool: EnginePool | null = null;
 let poolFile: string | null = null;

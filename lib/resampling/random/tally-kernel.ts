@@ -48,14 +48,14 @@ const SPARE_FIXED = 2048;
 /**
  * A block for a count array of n cells and up to `unitCells` cells of unit lists, or null when
  * WebAssembly is not available (callers then use a plain Int32Array). It keeps room for
- * SPARE_PER_UNIT·n + SPARE_FIXED more cells that kernels over the counts may place arrays in
- * (statistics/count-scan.ts: the sorted order a statistic scans the counts in, the sorted
- * values, a chunk of replicates).
+ * SPARE_PER_UNIT·n + SPARE_FIXED + `extraCells` more cells that kernels over the counts may
+ * place arrays in (statistics/count-scan.ts: the sorted order a statistic scans the counts in,
+ * the sorted values, a chunk of replicates; for cluster counts, tables over all rows).
  */
-export function tallyArena(n: number, unitCells = 0): TallyArena | null {
+export function tallyArena(n: number, unitCells = 0, extraCells = 0): TallyArena | null {
   const mod = tallyModule();
   if (!mod) return null;
-  const end = STATE_BYTES + 4 * (n + unitCells + SPARE_PER_UNIT * n + SPARE_FIXED);
+  const end = STATE_BYTES + 4 * (n + unitCells + SPARE_PER_UNIT * n + SPARE_FIXED + extraCells);
   let memory: WebAssembly.Memory;
   let exports: {
     add16(cnt: number, m: number, thr: number, times: number, st: number, units: number, via: number): void;

@@ -1,6 +1,10 @@
 import * as z from 'zod/mini';
 import { EngineError } from '../errors';
 import { columnName } from '../statistics/fields';
+import { CHUNK_SIZE } from '../replicates/chunks';
+import { tallyArena } from '../random/tally-kernel';
+import { clusterMedianRunner, type ClusterMedianTables } from '../statistics/count-scan';
+import { sortUnits } from '../statistics/sort-units';
 import { strataFromKeys } from './counting';
 import { defineScheme, type SchemeContext } from './types';
 
@@ -60,14 +64,21 @@ export const cluster = defineScheme({
       offset += set.length;
     }
     const sizeOf = Int32Array.from(sets.flat(), (rows) => rows.length);
-    const multiplicity = new Int32Array(offset);
+    const medianTables = s.secondStage ? null : clusterMedianTables(ctx, clusterOf);
+    // The median over one set of clusters: multiplicities in WebAssembly memory, where whole
+    // chunks of replicates run (statistics/count-scan.ts, clusterMedianRunner): the same draws
+    // and values as replicate() below.
+    const arena = medianTables && sets.length === 1 ? tallyArena(offset, 0, 3 * ctx.n + 2 * offset + 2 * CHUNK_SIZE + 16) : null;
+    const multiplicity = arena ? arena.counts : new Int32Array(offset);
+    const many = arena && medianTables ? clusterMedianRunner(multiplicity, medianTables, CHUNK_SIZE) : null;
     const drawn = new Int32Array(Math.max(...sets.map((set) => set.length)));
-    const fast = s.secondStage ? null : (clusterSums(ctx, sets, offset) ?? clusterMedian(ctx, clusterOf));
+    const fast = s.secondStage ? null : (clusterSums(ctx, sets, offset) ?? (medianTables ? medianFromTables(medianTables) : null));
     return {
       description: `cluster bootstrap, the ${clusters.length} clusters of ${s.by} resampled whole${s.secondStage ? ', then rows resampled within each drawn cluster' : ''}${withinGroups ? ', within each group' : ''}`,
       plainResampling: false,
-      // the mean's cluster sums cost O(G); the median's scan and the count path O(n)
-      workPerReplicate: fast && ctx.statisticName !== 'median' ? 4 * offset : undefined,
+      // the mean's cluster sums cost O(G), and so does the median's, whose scan from the middle
+      // walks a few standard errors' worth of rows; the count path O(n)
+      workPerReplicate: fast ? 4 * offset : undefined,
       details: { by: s.by, clusters: clusters.length, secondStage: s.secondStage, withinGroups, smallestCluster: Math.min(...sizes), largestCluster: Math.max(...sizes) },
       replicate(rng) {
         // Draws: G uniform cluster indices per set by the engine's unbiased bulk draws
@@ -87,13 +98,15 @@ export const cluster = defineScheme({
           }
         } else {
           multiplicity.fill(0);
-          for (let j = 0; j < sets.length; j++) rng.addCounts(multiplicity, sets[j].length, sets[j].length, setUnits[j]);
+          // one set's units are 0 … G − 1: drawn straight into their cells (the same draws)
+          for (let j = 0; j < sets.length; j++) rng.addCounts(multiplicity, sets[j].length, sets[j].length, sets.length === 1 ? null : setUnits[j]);
           for (let g = 0; g < offset; g++) total += multiplicity[g] * sizeOf[g];
           if (fast) return fast(multiplicity, total);
           for (let i = 0; i < counts.length; i++) counts[i] = multiplicity[clusterOf[i]];
         }
         return ctx.statistic.fromCounts(counts, total);
       },
+      ...(many ? { replicateMany: many } : {}),
     };
   },
 });
@@ -160,31 +173,73 @@ export function clusterSums(ctx: SchemeContext, sets: Int32Array[][], count: num
 
 /**
  * Fast path for the median under first-stage cluster resampling: the values sorted once,
- * each with its cluster's number, so the resample's order statistics are read by one scan
+ * each with its cluster's number, so the resample's order statistics are read by a scan
  * that adds the cluster multiplicities (a G-entry table) — no row counts built. Same value
  * as the row-count evaluation (R's median convention: the middle value, or the mean of the
  * two middle ones). Null for other statistics.
+ *
+ * The scan starts at the middle of the sorted values, not at the first: the resample's count
+ * below the middle is Σ_g c_g · below_g (below_g = rows of cluster g sorted before the middle,
+ * counted once), an O(G) sum, and from there the scan walks down or up to the order statistic
+ * it wants — which lies near the middle, a few standard errors of the median away, instead of
+ * n/2 positions from the start. Exact: the same position as a scan from the first value.
  */
 export function clusterMedian(ctx: SchemeContext, clusterOf: Int32Array): ((multiplicity: Int32Array, total: number) => number) | null {
+  const t = clusterMedianTables(ctx, clusterOf);
+  return t ? medianFromTables(t) : null;
+}
+
+/** clusterMedian's tables (also read by its WebAssembly twin); null for other statistics. */
+function clusterMedianTables(ctx: SchemeContext, clusterOf: Int32Array): ClusterMedianTables | null {
   if (ctx.statisticName !== 'median') return null;
   const x = ctx.data.values.x;
   if (!x) return null;
-  const order = Int32Array.from(x, (_, i) => i).sort((a, b) => x[a] - x[b]);
-  const sorted = Float64Array.from(order, (i) => x[i]);
+  // The engine's one presort (a radix sort in WebAssembly; a comparison sort called from
+  // JavaScript cost ~6 ms per thread on a cold start for 10⁴ values). Ties in any order: the
+  // resample's order statistics are values, the same whichever tied row comes first.
+  const { sorted, order } = sortUnits(x);
   const clusterSorted = Int32Array.from(order, (i) => clusterOf[i]);
   const m = sorted.length;
-  /** value at 0-based rank r of the resample, and (when wanted) at r + 1 */
-  const at = (c: Int32Array, r: number, pair: boolean): number => {
-    let cum = 0;
-    let p = 0;
-    for (; p < m; p++) {
-      cum += c[clusterSorted[p]];
-      if (cum > r) break;
+  const middle = m >> 1;
+  let clusters = 0;
+  for (let i = 0; i < m; i++) clusters = Math.max(clusters, clusterSorted[i] + 1);
+  const below = new Int32Array(clusters);
+  const size = new Int32Array(clusters);
+  for (let p = 0; p < m; p++) {
+    size[clusterSorted[p]]++;
+    if (p < middle) below[clusterSorted[p]]++;
+  }
+  return { sorted, clusterSorted, middle, below, size };
+}
+
+function medianFromTables(t: ClusterMedianTables): (multiplicity: Int32Array, total: number) => number {
+  const { sorted, clusterSorted, middle, below } = t;
+  const m = sorted.length;
+  const clusters = below.length;
+  return (c, total) => {
+    // S(p) = Σ_{q ≤ p} c[clusterSorted[q]], the resample's count up to sorted position p;
+    // wanted: the first p with S(p) > r, r the 0-based rank of the (lower) middle value.
+    const r = total % 2 === 1 ? (total - 1) / 2 : total / 2 - 1;
+    let cum = 0; // S(middle − 1)
+    for (let g = 0; g < clusters; g++) cum += c[g] * below[g];
+    let p: number;
+    if (cum > r) {
+      // down: from p = middle − 1 while S(p − 1) > r (S(−1) = 0 ≤ r ends it)
+      p = middle - 1;
+      for (let w = c[clusterSorted[p]]; cum - w > r; w = c[clusterSorted[p]]) {
+        cum -= w;
+        p--;
+      }
+    } else {
+      for (p = middle; p < m; p++) {
+        cum += c[clusterSorted[p]];
+        if (cum > r) break;
+      }
     }
-    if (!pair || cum > r + 1) return sorted[p];
+    // odd total, or the rank r + 1 falls on the same value: one order statistic
+    if (total % 2 === 1 || cum > r + 1) return sorted[p];
     let q = p + 1;
     while (q < m && c[clusterSorted[q]] === 0) q++;
     return (sorted[p] + (q < m ? sorted[q] : sorted[p])) / 2;
   };
-  return (c, total) => (total % 2 === 1 ? at(c, (total - 1) / 2, false) : at(c, total / 2 - 1, true));
 }

@@ -2,9 +2,10 @@ import seedrandom from 'seedrandom';
 import { describe, expect, it } from 'vitest';
 import { runRequest } from '../engine/run-request';
 import { prepare } from '../engine/run-request';
+import { createRng } from '../random/rng';
 import { STATISTICS } from '../statistics/registry';
 import { addClusterCounts } from '../structured/cluster-counts';
-import { clusterSums } from './cluster';
+import { clusterMedian, clusterSums } from './cluster';
 import { strataFromKeys } from './counting';
 import type { SchemeContext } from './types';
 
@@ -45,6 +46,66 @@ describe('fast paths give the replicates of the count-based path', () => {
     const site = daily.map((_, i) => `S${Math.floor(Math.sqrt(i * 3))}`);
     const r = (statistic: object) => runRequest({ data: { x: daily, site }, statistic, scheme: { name: 'cluster', by: 'site' }, B: 600, seed: 'fast', include: ['replicates'] }).replicates!;
     expect(r({ name: 'median', column: 'x' })).toEqual(r({ name: 'quantile', column: 'x', p: 0.5 }));
+  });
+
+  it('cluster median: the scan from the middle finds the order statistics a scan from the first value finds', () => {
+    // Multiplicities far from a real resample's too (most weight in the lowest or highest
+    // clusters, zeros at the middle, single clusters), odd and even totals; tied values.
+    const G = 37;
+    const x = Float64Array.from({ length: 211 }, (_, i) => Math.round(daily[i] * 4) / 4);
+    const clusterOf = Int32Array.from(x, (_, i) => (i * 7) % G);
+    const size = new Int32Array(G);
+    for (const g of clusterOf) size[g]++;
+    const fast = clusterMedian({ statisticName: 'median', data: { n: x.length, values: { x } } } as unknown as SchemeContext, clusterOf)!;
+    const order = Int32Array.from(x, (_, i) => i).sort((a, b) => x[a] - x[b]);
+    // the plain definition: the middle value(s) of the resample written out
+    const direct = (c: Int32Array): number => {
+      const values: number[] = [];
+      for (const i of order) for (let k = 0; k < c[clusterOf[i]]; k++) values.push(x[i]);
+      const t = values.length;
+      return t % 2 ? values[(t - 1) / 2] : (values[t / 2 - 1] + values[t / 2]) / 2;
+    };
+    const r = seedrandom('middle-scan');
+    const byValue = Array.from({ length: G }, (_, g) => g).sort((a, b) => Math.min(...x.filter((_, i) => clusterOf[i] === a)) - Math.min(...x.filter((_, i) => clusterOf[i] === b)));
+    for (let trial = 0; trial < 400; trial++) {
+      const c = new Int32Array(G);
+      const kind = trial % 4;
+      if (kind === 0) for (let j = 0; j < G; j++) c[Math.floor(r() * G)]++;
+      else if (kind === 1) c[Math.floor(r() * G)] = 1 + Math.floor(r() * 3);
+      else if (kind === 2) for (let j = 0; j < G; j++) c[byValue[Math.floor(r() * r() * G)]]++;
+      else for (let j = 0; j < G; j++) c[byValue[G - 1 - Math.floor(r() * r() * G)]]++;
+      const total = c.reduce((s, k, g) => s + k * size[g], 0);
+      expect(fast(c, total)).toBe(direct(c));
+    }
+  });
+
+  it('cluster median: whole chunks in WebAssembly give the replicates one at a time gives, and leave the random streams alike', () => {
+    const r = seedrandom('cluster-chunks');
+    // G clusters of 1 … 5 rows (odd and even resample sizes), values with ties
+    for (const G of [2, 7, 60, 300]) {
+      const site: string[] = [];
+      const x: number[] = [];
+      for (let g = 0; g < G; g++) {
+        const level = r() * 3;
+        for (let j = 0, rows = 1 + Math.floor(r() * 5); j < rows; j++) {
+          site.push(`site ${g}`);
+          x.push(Math.round((level + r()) * 8) / 8);
+        }
+      }
+      const problem = prepare({ data: { x, site }, statistic: { name: 'median', column: 'x' }, scheme: { name: 'cluster', by: 'site' }, B: 1000, seed: 's' });
+      expect(problem.scheme.replicateMany, `G = ${G}`).toBeDefined();
+      const a = createRng('cluster-chunks', `G${G}`);
+      const b = createRng('cluster-chunks', `G${G}`);
+      const one = Float64Array.from({ length: 400 }, () => problem.scheme.replicate(a));
+      const many = new Float64Array(410).fill(-1);
+      expect(problem.scheme.replicateMany!(b, many, 10, 400)).toBe(true);
+      expect(Array.from(many.subarray(10)), `G = ${G}`).toEqual(Array.from(one));
+      expect(many[9]).toBe(-1);
+      expect(problem.scheme.replicate(b)).toBe(problem.scheme.replicate(a));
+      // more than a chunk at once: declined, nothing drawn
+      expect(problem.scheme.replicateMany!(b, new Float64Array(2000), 0, 2000)).toBe(false);
+      expect(problem.scheme.replicate(b)).toBe(problem.scheme.replicate(a));
+    }
   });
 
   it('cluster difference of means by cluster sums = the statistic on expanded counts', () => {
