@@ -13,10 +13,10 @@
 //   node --import tsx bench/structured.ts     (also run at the end of `npm run bench`)
 //   REPS (Margin runs, default 5), RREPS (R runs, default 3)
 import { execFileSync, spawnSync } from 'node:child_process';
-import { mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { createRng, runRequest } from '@/lib/resampling';
+import { createRng } from '@/lib/resampling';
 import { benchEnv, median, peakRss, type Run, timed as timedIn } from './support/timed';
 
 const root = process.cwd();
@@ -103,16 +103,8 @@ export function runStructuredBench(): StructuredCase[] {
         if (rAvailable && i < slowReps) r.push(timed('Rscript', c.r));
       }
       const se = JSON.parse(m[0].out).se as number;
-      // inside the computation: Margin's runRequest on this thread (one core, after a warm-up run)
-      const body = JSON.parse(readFileSync(c.request, 'utf8'));
-      runRequest(body);
-      const insideRuns: number[] = [];
-      for (let i = 0; i < 3; i++) {
-        const t0 = performance.now();
-        runRequest(body);
-        insideRuns.push((performance.now() - t0) / 1000);
-      }
-      const insideMargin = median(insideRuns);
+      // inside the computation: Margin's runRequest on one thread, in a fresh process (bench/structured/inside.ts)
+      const insideMargin = Number(execFileSync(process.execPath, ['--import', 'tsx', path.join(root, 'bench/structured/inside.ts'), c.request, '3'], { cwd: root, encoding: 'utf8' }).trim());
       const insideR = r.length ? median(r.map((x) => Number(/inside ([\d.]+)/.exec(x.out)?.[1] ?? Number.NaN))) : null;
       const margin = { seconds: median(m.map((x) => x.seconds)), rssMB: peakRss(m), runs: m.map((x) => x.seconds), se };
       const rr = r.length ? { seconds: median(r.map((x) => x.seconds)), rssMB: peakRss(r), runs: r.map((x) => x.seconds), out: r[0].out } : null;

@@ -16,6 +16,7 @@ export const WASM_MODULES = [
   { wat: 'lib/resampling/statistics/sort-positions.wat', ts: 'lib/resampling/statistics/sort-positions-wasm.ts', name: 'SORT_POSITIONS_WASM' },
   { wat: 'lib/resampling/statistics/count-scan.wat', ts: 'lib/resampling/statistics/count-scan-wasm.ts', name: 'COUNT_SCAN_WASM' },
   { wat: 'lib/resampling/math/series-sums.wat', ts: 'lib/resampling/math/series-sums-wasm.ts', name: 'SERIES_SUMS_WASM' },
+  { wat: 'lib/resampling/schemes/cluster-chunks.wat', ts: 'lib/resampling/schemes/cluster-chunks-wasm.ts', name: 'CLUSTER_CHUNKS_WASM' },
 ];
 
 /** A module's bytes, as wabt compiles its .wat (path relative to the project root). */

@@ -3,8 +3,8 @@ import { EngineError } from '../errors';
 import { columnName } from '../statistics/fields';
 import { CHUNK_SIZE } from '../replicates/chunks';
 import { tallyArena } from '../random/tally-kernel';
-import { clusterMedianRunner, type ClusterMedianTables } from '../statistics/count-scan';
 import { sortUnits } from '../statistics/sort-units';
+import { type ClusterMedianTables, clusterMeanRunner, clusterMedianRunner } from './cluster-chunks';
 import { strataFromKeys } from './counting';
 import { defineScheme, type SchemeContext } from './types';
 
@@ -64,15 +64,17 @@ export const cluster = defineScheme({
       offset += set.length;
     }
     const sizeOf = Int32Array.from(sets.flat(), (rows) => rows.length);
-    const medianTables = s.secondStage ? null : clusterMedianTables(ctx, clusterOf);
-    // The median over one set of clusters: multiplicities in WebAssembly memory, where whole
-    // chunks of replicates run (statistics/count-scan.ts, clusterMedianRunner): the same draws
-    // and values as replicate() below.
-    const arena = medianTables && sets.length === 1 ? tallyArena(offset, 0, 3 * ctx.n + 2 * offset + 2 * CHUNK_SIZE + 16) : null;
+    const sumTables = s.secondStage ? null : clusterSumTables(ctx, sets, offset);
+    const medianTables = s.secondStage || sumTables ? null : clusterMedianTables(ctx, clusterOf);
+    // The mean or the median over one set of clusters: multiplicities in WebAssembly memory,
+    // where whole chunks of replicates run (cluster-chunks.ts) — the same draws and values as
+    // replicate() below.
+    const inChunks = sets.length === 1 && (medianTables !== null || (sumTables !== null && !sumTables.group));
+    const arena = inChunks ? tallyArena(offset, 0, (medianTables ? 3 * ctx.n : 0) + 4 * offset + 2 * CHUNK_SIZE + 16) : null;
     const multiplicity = arena ? arena.counts : new Int32Array(offset);
-    const many = arena && medianTables ? clusterMedianRunner(multiplicity, medianTables, CHUNK_SIZE) : null;
+    const many = !arena ? null : medianTables ? clusterMedianRunner(multiplicity, medianTables, CHUNK_SIZE) : clusterMeanRunner(multiplicity, sumTables!.sa, sumTables!.na, CHUNK_SIZE);
     const drawn = new Int32Array(Math.max(...sets.map((set) => set.length)));
-    const fast = s.secondStage ? null : (clusterSums(ctx, sets, offset) ?? (medianTables ? medianFromTables(medianTables) : null));
+    const fast = sumTables ? sumsFromTables(sumTables) : medianTables ? medianFromTables(medianTables) : null;
     return {
       description: `cluster bootstrap, the ${clusters.length} clusters of ${s.by} resampled whole${s.secondStage ? ', then rows resampled within each drawn cluster' : ''}${withinGroups ? ', within each group' : ''}`,
       plainResampling: false,
@@ -119,6 +121,21 @@ export const cluster = defineScheme({
  * other statistics.
  */
 export function clusterSums(ctx: SchemeContext, sets: Int32Array[][], count: number): ((multiplicity: Int32Array, total: number) => number) | null {
+  const t = clusterSumTables(ctx, sets, count);
+  return t ? sumsFromTables(t) : null;
+}
+
+/** clusterSums' tables, per cluster: the totals and row counts of group 0 (a) and group 1 (b). */
+interface ClusterSumTables {
+  sa: Float64Array;
+  na: Float64Array;
+  sb: Float64Array;
+  nb: Float64Array;
+  /** The difference of means: the group of each row. */
+  group: ArrayLike<number> | undefined;
+}
+
+function clusterSumTables(ctx: SchemeContext, sets: Int32Array[][], count: number): ClusterSumTables | null {
   const name = ctx.statisticName;
   if (name !== 'mean' && name !== 'mean-difference') return null;
   const x = ctx.data.values.x;
@@ -144,6 +161,12 @@ export function clusterSums(ctx: SchemeContext, sets: Int32Array[][], count: num
       k++;
     }
   }
+  return { sa, na, sb, nb, group };
+}
+
+function sumsFromTables(t: ClusterSumTables): (multiplicity: Int32Array, total: number) => number {
+  const { sa, na, sb, nb, group } = t;
+  const count = sa.length;
   if (!group) {
     return (c) => {
       let s = 0;
@@ -189,7 +212,7 @@ export function clusterMedian(ctx: SchemeContext, clusterOf: Int32Array): ((mult
   return t ? medianFromTables(t) : null;
 }
 
-/** clusterMedian's tables (also read by its WebAssembly twin); null for other statistics. */
+/** clusterMedian's tables (also read by its WebAssembly twin, cluster-chunks.ts); null for other statistics. */
 function clusterMedianTables(ctx: SchemeContext, clusterOf: Int32Array): ClusterMedianTables | null {
   if (ctx.statisticName !== 'median') return null;
   const x = ctx.data.values.x;

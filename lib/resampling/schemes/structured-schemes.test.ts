@@ -79,8 +79,8 @@ describe('fast paths give the replicates of the count-based path', () => {
     }
   });
 
-  it('cluster median: whole chunks in WebAssembly give the replicates one at a time gives, and leave the random streams alike', () => {
-    const r = seedrandom('cluster-chunks');
+  it.each(['median', 'mean'])('cluster %s: whole chunks in WebAssembly (cluster-chunks.wat) give the replicates one at a time gives, and leave the random streams alike', (name) => {
+    const r = seedrandom(`cluster-chunks ${name}`);
     // G clusters of 1 … 5 rows (odd and even resample sizes), values with ties
     for (const G of [2, 7, 60, 300]) {
       const site: string[] = [];
@@ -92,7 +92,7 @@ describe('fast paths give the replicates of the count-based path', () => {
           x.push(Math.round((level + r()) * 8) / 8);
         }
       }
-      const problem = prepare({ data: { x, site }, statistic: { name: 'median', column: 'x' }, scheme: { name: 'cluster', by: 'site' }, B: 1000, seed: 's' });
+      const problem = prepare({ data: { x, site }, statistic: { name, column: 'x' }, scheme: { name: 'cluster', by: 'site' }, B: 1000, seed: 's' });
       expect(problem.scheme.replicateMany, `G = ${G}`).toBeDefined();
       const a = createRng('cluster-chunks', `G${G}`);
       const b = createRng('cluster-chunks', `G${G}`);

@@ -19,7 +19,6 @@ let reached = 0;
 interface Scanner {
   scan: (counts: number, order: number, r: number, m: number, out: number) => number;
   orderChunk: (counts: number, m: number, thr: number, st: number, order: number, sorted: number, reps: number, out: number, scr: number, quantile: number, p: number) => void;
-  clusterMedianChunk: (counts: number, G: number, thr: number, st: number, cs: number, sorted: number, m: number, mid: number, below: number, size: number, reps: number, out: number) => void;
   /** Where the scan leaves its running count (a cell placed in the arena). */
   out: Int32Array;
   /** Each order array's copy in the arena (null: no room left, scanned in JavaScript). */
@@ -48,13 +47,7 @@ function makeScanner(counts: Int32Array): Scanner | null {
     // 16 bytes of scratch: the running count, and a value (count-scan.wat)
     const out = kernel.place(new Int32Array(4));
     if (!out) return null;
-    return {
-      scan: exports.scanTo as Scanner['scan'],
-      orderChunk: exports.orderChunk as Scanner['orderChunk'],
-      clusterMedianChunk: exports.clusterMedianChunk as Scanner['clusterMedianChunk'],
-      out,
-      orders: new Map(),
-    };
+    return { scan: exports.scanTo as Scanner['scan'], orderChunk: exports.orderChunk as Scanner['orderChunk'], out, orders: new Map() };
   } catch {
     return null;
   }
@@ -102,63 +95,6 @@ export function orderChunkRunner(
   return (rng, theta, offset, count) => {
     if (count > maxReps) return false;
     rng.withLanes(kernel.state, () => orderChunk(counts.byteOffset, n, threshold, kernel.state.byteOffset, orderAt, sortedAt, count, out.byteOffset, s.out.byteOffset, quantile, p));
-    theta.set(out.subarray(0, count), offset);
-    return true;
-  };
-}
-
-/** The tables the median under first-stage cluster resampling is read from (schemes/cluster.ts). */
-export interface ClusterMedianTables {
-  /** The values in ascending order. */
-  sorted: Float64Array;
-  /** The cluster of each sorted value's row. */
-  clusterSorted: Int32Array;
-  /** The middle sorted position, ⌊m/2⌋, where the scan starts. */
-  middle: number;
-  /** Per cluster, its rows sorted before the middle. */
-  below: Int32Array;
-  /** Per cluster, its rows. */
-  size: Int32Array;
-}
-
-/**
- * Whole replicates of the median under first-stage cluster resampling in WebAssembly
- * (count-scan.wat, clusterMedianChunk): each clears the G multiplicities, draws the clusters as
- * rng.addCounts(multiplicity, G, G, null) does and reads the median as clusterMedian
- * (schemes/cluster.ts) does — the same values as one replicate at a time
- * (structured-schemes.test.ts). Why: in JavaScript each thread's first chunks ran at a
- * fraction of the speed of its later ones until V8 had optimized the loops (~50 ms of a
- * worker's first chunk on a cold start, against ~3 ms warm). For multiplicities in a tally
- * arena with room for the tables and `maxReps` replicates, up to 2¹⁶ clusters and resample
- * sizes that fit in 32 bits; else null. The runner returns false (having drawn nothing) for
- * more replicates.
- */
-export function clusterMedianRunner(
-  multiplicity: Int32Array,
-  t: ClusterMedianTables,
-  maxReps: number,
-): ((rng: Rng, theta: Float64Array, offset: number, count: number) => boolean) | null {
-  const s = scannerFor(multiplicity);
-  const kernel = kernelOf(multiplicity);
-  if (!s || !kernel) return null;
-  const G = multiplicity.length;
-  const m = t.sorted.length;
-  let largest = 0;
-  for (let g = 0; g < G; g++) largest = Math.max(largest, t.size[g]);
-  if (G > 65536 || t.size.length !== G || t.below.length !== G || G * largest > 0x7fffffff) return null;
-  const cs = kernel.place(t.clusterSorted);
-  const sorted = kernel.placeDoubles(t.sorted);
-  const below = kernel.place(t.below);
-  const size = kernel.place(t.size);
-  const out = kernel.placeDoubles(new Float64Array(maxReps));
-  if (!cs || !sorted || !below || !size || !out) return null;
-  const threshold = (65536 - G) % G;
-  const { clusterMedianChunk } = s;
-  return (rng, theta, offset, count) => {
-    if (count > maxReps) return false;
-    rng.withLanes(kernel.state, () =>
-      clusterMedianChunk(multiplicity.byteOffset, G, threshold, kernel.state.byteOffset, cs.byteOffset, sorted.byteOffset, m, t.middle, below.byteOffset, size.byteOffset, count, out.byteOffset),
-    );
     theta.set(out.subarray(0, count), offset);
     return true;
   };
