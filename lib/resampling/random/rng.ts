@@ -1,5 +1,5 @@
 import seedrandom from 'seedrandom';
-import { kernelOf, type TallyKernel } from './tally-kernel';
+import { kernelOf, type TallyKernel, threshold16 } from './tally-kernel';
 import { uniformIndex as uniformIndex32 } from './uniform-index';
 
 /** A seeded random source: 32-bit integers, doubles in [0, 1), and bulk index counts. */
@@ -51,7 +51,6 @@ export interface Rng {
 export const RNG_NAME = 'tychei (Tyche-i, seeded by seedrandom 3.0.5; indices below 2^16 from four interleaved lane streams)';
 
 const TWO32 = 4294967296;
-const TWO16 = 65536;
 /** Up to this many units, indices come from the four lanes, two per output (its 16-bit halves). */
 export const SMALL_M = 65536;
 /** Generators side by side for the 16-bit index draws (one SIMD vector of 32-bit lanes). */
@@ -120,7 +119,7 @@ export class TycheI implements Rng {
     // four lanes in local variables, each step's eight candidates written out in order).
     if (m <= SMALL_M) {
       if (times <= 0) return;
-      const threshold = (TWO16 - m) % m;
+      const threshold = threshold16(m);
       const st = this.laneState();
       let a0 = st[0];
       let a1 = st[1];
@@ -263,7 +262,7 @@ export class TycheI implements Rng {
    * the draws are the same.
    */
   private addWasm16(kernel: TallyKernel, counts: Int32Array, m: number, times: number, units: Int32Array | null): void {
-    this.withLanes(kernel.state, () => kernel.add16(counts.byteOffset, m, (TWO16 - m) % m, times, units === null ? null : units.byteOffset));
+    this.withLanes(kernel.state, () => kernel.add16(counts.byteOffset, m, threshold16(m), times, units === null ? null : units.byteOffset));
   }
 
   withLanes(state: Int32Array, f: () => void): void {
@@ -278,7 +277,7 @@ export class TycheI implements Rng {
    * 16-bit half of each lane's output (lane 0 high half, lane 0 low half, lane 1 high half, …).
    */
   private addJs16(counts: Int32Array, m: number, times: number, units: Int32Array | null): void {
-    const threshold = (TWO16 - m) % m;
+    const threshold = threshold16(m);
     let k = 0;
     // Steps go in batches of q ≤ ⌊(times − k)/8⌋, which can accept at most times − k draws,
     // so each batch is a plain counted loop and every index of every step in it has room;

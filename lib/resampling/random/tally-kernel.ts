@@ -1,4 +1,5 @@
 import { lazyWasmModule } from '../wasm-module';
+import type { Rng } from './rng';
 import { TALLY16_WASM } from './tally16-wasm';
 
 /**
@@ -106,4 +107,33 @@ export function tallyArena(n: number, unitCells = 0, extraCells = 0): TallyArena
 /** The kernel whose memory holds this array, if any. */
 export function kernelOf(a: Int32Array): TallyKernel | undefined {
   return kernels.get(a.buffer);
+}
+
+/**
+ * Lemire's rejection threshold for an index below m drawn from 16 bits, 2¹⁶ mod m (m ≤ 2¹⁶):
+ * the generator's 16-bit loops, here and in rng.ts, reject a draw whose low part falls below it.
+ */
+export function threshold16(m: number): number {
+  return (65536 - m) % m;
+}
+
+/** `count` replicates into theta[offset…]; false, having drawn nothing, when it cannot. */
+export type ChunkRunner = (rng: Rng, theta: Float64Array, offset: number, count: number) => boolean;
+
+/**
+ * Whole chunks of replicates drawn by a WebAssembly function over a kernel's memory
+ * (statistics/count-scan.ts, schemes/cluster-chunks.ts): room for maxReps doubles is placed in
+ * the arena, and `run(count, out)` draws `count` replicates with the generator's lanes in the
+ * kernel's state, writing them at byte offset `out`; the runner copies them to theta. Null
+ * when the arena has no room left.
+ */
+export function chunkRunner(kernel: TallyKernel, maxReps: number, run: (count: number, out: number) => void): ChunkRunner | null {
+  const out = kernel.placeDoubles(new Float64Array(maxReps));
+  if (!out) return null;
+  return (rng, theta, offset, count) => {
+    if (count > maxReps) return false;
+    rng.withLanes(kernel.state, () => run(count, out.byteOffset));
+    theta.set(out.subarray(0, count), offset);
+    return true;
+  };
 }

@@ -1,5 +1,4 @@
-import type { Rng } from '../random/rng';
-import { kernelOf, type TallyKernel } from '../random/tally-kernel';
+import { type ChunkRunner, chunkRunner, kernelOf, type TallyKernel, threshold16 } from '../random/tally-kernel';
 import { lazyWasmModule } from '../wasm-module';
 import { CLUSTER_CHUNKS_WASM } from './cluster-chunks-wasm';
 
@@ -13,8 +12,6 @@ import { CLUSTER_CHUNKS_WASM } from './cluster-chunks-wasm';
  * replicates; the runners are null otherwise, and return false (having drawn nothing) for more
  * replicates than they were made for.
  */
-export type ChunkRunner = (rng: Rng, theta: Float64Array, offset: number, count: number) => boolean;
-
 /** The tables the median under first-stage cluster resampling is read from (cluster.ts). */
 export interface ClusterMedianTables {
   /** The values in ascending order. */
@@ -38,8 +35,9 @@ const chunkModule = lazyWasmModule(CLUSTER_CHUNKS_WASM);
 
 /**
  * A runner over `multiplicity` (G ≤ 2¹⁶ cells in a tally arena) for chunks of up to maxReps:
- * `place` puts the statistic's tables in the arena and returns the call for `count`
- * replicates written at byte offset `out` (null when there is no room).
+ * `place` puts the statistic's tables in the arena and returns the call that draws `count`
+ * replicates with rejection threshold `threshold` and writes them at byte offset `out` (null
+ * when there is no room).
  */
 function runner(
   multiplicity: Int32Array,
@@ -57,16 +55,9 @@ function runner(
     return null;
   }
   const call = place(kernel, exports);
-  const out = kernel.placeDoubles(new Float64Array(maxReps));
-  if (!call || !out) return null;
-  // Lemire's rejection threshold for draws below G from 16 bits, as rng.ts computes it
-  const threshold = (65536 - G) % G;
-  return (rng, theta, offset, count) => {
-    if (count > maxReps) return false;
-    rng.withLanes(kernel.state, () => call(threshold, count, out.byteOffset));
-    theta.set(out.subarray(0, count), offset);
-    return true;
-  };
+  if (!call) return null;
+  const threshold = threshold16(G);
+  return chunkRunner(kernel, maxReps, (count, out) => call(threshold, count, out));
 }
 
 /** The median (clusterMedian in cluster.ts); null also when a resample's size could pass 2³¹ − 1. */

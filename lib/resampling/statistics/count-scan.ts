@@ -1,5 +1,4 @@
-import type { Rng } from '../random/rng';
-import { kernelOf, type TallyKernel } from '../random/tally-kernel';
+import { type ChunkRunner, chunkRunner, kernelOf, type TallyKernel, threshold16 } from '../random/tally-kernel';
 import { lazyWasmModule } from '../wasm-module';
 import { COUNT_SCAN_WASM } from './count-scan-wasm';
 
@@ -71,11 +70,7 @@ function placedOrder(s: Scanner, kernel: TallyKernel, order: Int32Array): Int32A
  * For counts in a tally arena with room for the order, the sorted values and `maxReps`
  * replicates; else null. The runner returns false (having drawn nothing) for more replicates.
  */
-export function orderChunkRunner(
-  counts: Int32Array,
-  q: { sorted: Float64Array; order: Int32Array; p: number | null },
-  maxReps: number,
-): ((rng: Rng, theta: Float64Array, offset: number, count: number) => boolean) | null {
+export function orderChunkRunner(counts: Int32Array, q: { sorted: Float64Array; order: Int32Array; p: number | null }, maxReps: number): ChunkRunner | null {
   const s = scannerFor(counts);
   const kernel = kernelOf(counts);
   if (!s || !kernel) return null;
@@ -84,20 +79,14 @@ export function orderChunkRunner(
   if (q.order.length !== n || q.sorted.length !== n || n > 65536) return null;
   const order = placedOrder(s, kernel, q.order);
   const sorted = kernel.placeDoubles(q.sorted);
-  const out = kernel.placeDoubles(new Float64Array(maxReps));
-  if (!order || !sorted || !out) return null;
-  const threshold = (65536 - n) % n;
+  if (!order || !sorted) return null;
+  const threshold = threshold16(n);
   const quantile = q.p === null ? 0 : 1;
   const p = q.p ?? 0;
   const { orderChunk } = s;
-  const orderAt = order.byteOffset;
-  const sortedAt = sorted.byteOffset;
-  return (rng, theta, offset, count) => {
-    if (count > maxReps) return false;
-    rng.withLanes(kernel.state, () => orderChunk(counts.byteOffset, n, threshold, kernel.state.byteOffset, orderAt, sortedAt, count, out.byteOffset, s.out.byteOffset, quantile, p));
-    theta.set(out.subarray(0, count), offset);
-    return true;
-  };
+  return chunkRunner(kernel, maxReps, (count, out) =>
+    orderChunk(counts.byteOffset, n, threshold, kernel.state.byteOffset, order.byteOffset, sorted.byteOffset, count, out, s.out.byteOffset, quantile, p),
+  );
 }
 
 /** The scan in WebAssembly when counts live in a tally arena with room for `order`; else -1. */
