@@ -41,10 +41,12 @@ export async function main(argv: string[]): Promise<void> {
 
   trace('cli:start');
   let input: unknown;
+  let large: boolean | undefined;
   // The launcher may have parsed the file already (early-worker.cjs).
   const early = file === '-' ? null : takeEarlyRequest(file);
   if (early) {
     input = early.input;
+    large = early.large;
     trace('cli:request-from-launcher');
   } else {
     let text: string;
@@ -62,7 +64,7 @@ export async function main(argv: string[]): Promise<void> {
   // A large request goes to worker threads: start them now, so that they start up while
   // this thread loads the engine (a separate chunk of the bundle, imported only now) and
   // validates and prepares the request.
-  if (threads !== 0 && looksLarge(input)) prewarmCompute(threads ?? defaultWorkers(true));
+  if (threads !== 0 && (large ?? looksLarge(input))) prewarmCompute(threads ?? defaultWorkers(true));
   try {
     trace('cli:workers-started');
     const { compute } = await import('./index');

@@ -95,8 +95,9 @@ function startEarly(argv, workerFile) {
   } catch {
     return;
   }
-  globalThis[REQUEST_KEY] = { file, input };
-  if (noWorkers || !looksLarge(input) || availableParallelism() < 2) return;
+  const large = looksLarge(input);
+  globalThis[REQUEST_KEY] = { file, input, large };
+  if (noWorkers || !large || availableParallelism() < 2) return;
   const worker = new Worker(workerFile);
   worker.unref();
   let ready = false;
@@ -117,11 +118,14 @@ function dropEarlyWorker() {
   if (early) void early.worker.terminate();
 }
 
-/** The command line: the request the launcher parsed from `file`, as { input } (once), else null. */
+/**
+ * The command line: the request the launcher parsed from `file`, and whether it looked large
+ * (looksLarge, so the guess is not made twice), as { input, large } (once), else null.
+ */
 function takeEarlyRequest(file) {
   const early = globalThis[REQUEST_KEY];
   globalThis[REQUEST_KEY] = undefined;
-  return early && early.file === file ? { input: early.input } : null;
+  return early && early.file === file ? { input: early.input, large: early.large } : null;
 }
 
 /** The pool: the early worker when it runs this worker bundle (once), else null. */
